@@ -1,0 +1,4 @@
+export * from './types';
+export * from './errors';
+export * from './transient/index';
+export * from './field/index';
