@@ -1,4 +1,11 @@
 export * from './types';
 export * from './errors';
+export { calculate } from './calculate';
+export { validateSpec } from './validate-spec';
+export { ESTIMATE_NOTE } from './estimate-note';
+export { lineKinds, lineKind, kindFields, kindLabel, type LineKindDescription } from './kinds/registry';
+export type { FieldDescription, FieldQuantity, MethodOption } from './kinds/line-model';
+export type { ValidityRange } from './validation';
+export * from './constants';
 export * from './transient/index';
 export * from './field/index';

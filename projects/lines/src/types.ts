@@ -19,6 +19,20 @@ export interface CommonLineFields {
   roughness?: number;
   /** Picks an alternative published method where a kind offers several. */
   method?: string;
+  /**
+   * Roughness model for conductor loss: 'hammerstad-bekkadal' (default, uses
+   * `roughness`) or 'huray' (uses `noduleRadius` and `noduleSurfaceRatio`).
+   */
+  roughnessModel?: 'hammerstad-bekkadal' | 'huray';
+  /** Huray model: radius of the copper nodules ("snowballs") [m]. */
+  noduleRadius?: number;
+  /** Huray model: total nodule surface per unit of flat surface, N·4πa²/A_flat (dimensionless). */
+  noduleSurfaceRatio?: number;
+  /**
+   * When given, `er` and `tanDelta` are the values measured at this frequency [Hz]
+   * and the Djordjevic–Sarkar wideband causal model carries them to `frequency`.
+   */
+  dielectricReferenceFrequency?: number;
 }
 
 export interface CoaxSpec extends CommonLineFields {
@@ -179,7 +193,21 @@ export interface LineResult {
   lossDb?: number;
   electricalLengthDeg?: number;
 
-  // Coupled kinds:
+  // With `frequency` and `dielectricReferenceFrequency` (wideband dielectric):
+  /** Relative permittivity at `frequency`. */
+  erAtFrequency?: number;
+  /** Loss tangent at `frequency`. */
+  tanDeltaAtFrequency?: number;
+
+  // Coax:
+  /** TE11 cut-off frequency: above it the coax is no longer single-mode [Hz]. */
+  cutoffFrequency?: number;
+  /** With `dielectricStrength`: peak voltage at which the field at the inner conductor reaches it [V]. */
+  peakVoltage?: number;
+  /** With `dielectricStrength`: matched CW power at that peak voltage, no margin, no heating limit [W]. */
+  maxPower?: number;
+
+  // Coupled kinds (erEff, delay, L, C, R, G, losses and zc then describe the odd, i.e. differential, mode):
   zOdd?: number;
   zEven?: number;
   zDiff?: number;
