@@ -9,3 +9,5 @@ export type { ValidityRange } from './validation';
 export * from './constants';
 export * from './transient/index';
 export * from './field/index';
+export { lengthUnits, frequencyUnits, toSi, fromSi, COPPER_OUNCE_THICKNESS, type LengthUnit, type FrequencyUnit, type TableUnit } from './units/length-units';
+export { parseQuantity } from './units/parse-quantity';
