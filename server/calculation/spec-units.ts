@@ -1,0 +1,27 @@
+/**
+ * Units at the edge: a spec may carry unit strings ("5 mil", "1 oz", "2.4 GHz");
+ * the library only ever sees SI numbers. Each field's quantity comes from the
+ * library's own field descriptions, so "5 mil" is refused for a frequency.
+ */
+import { LineInputError, kindFields, parseQuantity, type LineSpec } from '@linewright/lines';
+
+export function specToSi(input: Record<string, unknown>, path = 'spec'): LineSpec {
+  const fields = new Map(kindFields(input['kind'] as LineSpec['kind']).map((field) => [field.name, field]));
+  const spec: Record<string, unknown> = {};
+  for (const [name, value] of Object.entries(input)) {
+    const field = fields.get(name);
+    spec[name] = typeof value === 'string' && field && field.quantity !== 'boolean' ? parseQuantity(value, field.quantity, `${path}.${name}`) : value;
+  }
+  return spec as unknown as LineSpec;
+}
+
+/** Runs `compute`, naming the library's field errors by their request path (`w` → `spec.w`). */
+export function withFieldPath<T>(path: string, compute: () => T): T {
+  try {
+    return compute();
+  } catch (error) {
+    // The library names fields as the spec does; the client needs the path within the request.
+    if (error instanceof LineInputError && !error.field.startsWith(`${path}.`)) throw new LineInputError(`${path}.${error.field}`, error.rule);
+    throw error;
+  }
+}
