@@ -1,1 +1,6 @@
-export {};
+export type * from './circuit';
+export { stepResponse } from './step-response';
+export { thresholdCrossing, type ThresholdQuestion } from './threshold';
+export type { ThresholdCrossing } from './settle';
+export { reflectionCoefficient } from './lattice';
+export { DEFAULT_BAND, DEFAULT_POINTS, MAX_POINTS, MIN_POINTS } from './validate-circuit';
