@@ -37,12 +37,13 @@ export const coaxModel: LineModel<CoaxSpec> = {
   label: 'Coaxial line',
   description: 'A round inner conductor centred in a round shield, filled with one dielectric.',
   fields: [
-    positiveLength('d', 'Inner conductor diameter', 'Outer diameter of the centre conductor.', 0.51e-3),
-    positiveLength('D', 'Shield inner diameter', 'Inner diameter of the shield (outer diameter of the dielectric).', 1.68e-3),
+    positiveLength('d', 'Inner conductor diameter', 'Outer diameter of the centre conductor.', 0.9e-3),
+    positiveLength('D', 'Shield inner diameter', 'Inner diameter of the shield (outer diameter of the dielectric).', 3.1e-3),
     { name: 'dielectricStrength', label: 'Dielectric strength', description: 'Breakdown field of the insulation, for a voltage and power estimate.', quantity: 'electricField', isLength: false, isOptional: true, defaultValue: 20e6, min: 0, minExclusive: true, group: 'material' },
   ],
   methods: [{ id: 'exact', ...EXACT_TEM }],
   validity: [],
+  materialDefaults: { er: 2.25, tanDelta: 0.0002 },
   isCoupled: false,
   validate(spec) {
     requirePositive('d', spec.d);

@@ -71,6 +71,8 @@ export interface LineModel<S extends LineSpec = LineSpec> {
   /** Kind-specific fields (geometry and any extra inputs), in form order. */
   fields: readonly FieldDescription[];
   methods: readonly MethodOption[];
+  /** Defaults of common fields that differ for this kind (e.g. polyethylene for coax). */
+  materialDefaults?: Readonly<Record<string, number>>;
   /** Published validity ranges of the default method, for the form's hints. */
   validity: readonly ValidityRange[];
   /** True for kinds whose result has zOdd, zEven, zDiff… */

@@ -9,15 +9,29 @@ import type { ValidityRange } from '../validation';
 import { coaxModel } from './coax';
 import { commonFields } from './field-descriptions';
 import type { AnyLineModel, FieldDescription, LineModel, MethodOption } from './line-model';
+import { coupledMicrostripModel } from './coupled-microstrip';
+import { coupledStriplineModel } from './coupled-stripline';
+import { cpwModel } from './cpw';
+import { embeddedMicrostripModel } from './embedded-microstrip';
 import { microstripModel } from './microstrip';
+import { offsetStriplineModel } from './offset-stripline';
+import { striplineModel } from './stripline';
 import { twinLeadModel } from './twin-lead';
+import { twistedPairModel } from './twisted-pair';
 import { wireOverGroundModel } from './wire-over-ground';
 
-const models: { [K in LineKind]?: LineModel<Extract<LineSpec, { kind: K }>> } = {
+const models: { [K in LineKind]: LineModel<Extract<LineSpec, { kind: K }>> } = {
+  microstrip: microstripModel,
+  'embedded-microstrip': embeddedMicrostripModel,
+  stripline: striplineModel,
+  'offset-stripline': offsetStriplineModel,
+  cpw: cpwModel,
+  'coupled-microstrip': coupledMicrostripModel,
+  'coupled-stripline': coupledStriplineModel,
   coax: coaxModel,
   'twin-lead': twinLeadModel,
   'wire-over-ground': wireOverGroundModel,
-  microstrip: microstripModel,
+  'twisted-pair': twistedPairModel,
 };
 
 /** What a form or API document needs to know about one kind; plain data (JSON-safe). */
@@ -37,8 +51,9 @@ export interface LineKindDescription {
 }
 
 function describe(model: AnyLineModel): LineKindDescription {
-  const { kind, label, description, fields, methods, validity, isCoupled } = model;
-  return { kind, label, description, fields: [...fields, ...commonFields], methods, validity, isCoupled };
+  const { kind, label, description, fields, methods, validity, isCoupled, materialDefaults = {} } = model;
+  const common = commonFields.map((field) => (field.name in materialDefaults ? { ...field, defaultValue: materialDefaults[field.name] } : field));
+  return { kind, label, description, fields: [...fields, ...common], methods, validity, isCoupled };
 }
 
 /** Every kind, in menu order, as plain data. */

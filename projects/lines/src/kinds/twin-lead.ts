@@ -17,6 +17,7 @@ export const twinLeadModel: LineModel<TwinLeadSpec> = {
   ],
   methods: [{ id: 'exact', ...EXACT_TEM }],
   validity: [],
+  materialDefaults: { er: 1.15, tanDelta: 0.0005 },
   isCoupled: false,
   validate(spec) {
     requirePositive('d', spec.d);

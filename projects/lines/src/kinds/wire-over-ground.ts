@@ -17,6 +17,7 @@ export const wireOverGroundModel: LineModel<WireOverGroundSpec> = {
   ],
   methods: [{ id: 'exact', ...EXACT_TEM }],
   validity: [],
+  materialDefaults: { er: 1, tanDelta: 0 },
   isCoupled: false,
   validate(spec) {
     requirePositive('d', spec.d);
