@@ -6,7 +6,7 @@ import { createLogger } from './logger';
 
 export async function startServer(env: NodeJS.ProcessEnv = process.env) {
   const config = loadConfig(env);
-  const logger = createLogger();
+  const logger = createLogger(env['LOG_LEVEL']);
   const db = createDatabase(config);
   const app = createApp({ config, db, logger });
   const server = await new Promise<import('node:http').Server>((done, fail) => {
