@@ -1,1 +1,17 @@
-export {};
+/** The quasi-static 2D field solver: cross-sections, the solver, and the LineSpec converter. */
+export type { CircleShape, CrossSection, DielectricRegion, GroundPlanes, RectangleShape, SectionConductor, Shape, TrapezoidShape } from './cross-section';
+export { crossSectionFromSpec, type CrossSectionOptions } from './cross-section-from-spec';
+export {
+  DEFAULT_MAX_CELLS,
+  DEFAULT_MAX_MILLIS,
+  DEFAULT_TOLERANCE,
+  FieldSolveCancelledError,
+  fieldSolve,
+  type FieldSolveLevel,
+  type FieldSolveOptions,
+  type FieldSolveProgress,
+  type FieldSolveResult,
+} from './field-solve';
+export { fieldSolveLine, type FieldLineResult } from './field-solve-line';
+export type { LineParameters } from './line-parameters';
+export type { PotentialMap } from './potential-map';
