@@ -11,3 +11,8 @@ export * from './transient/index';
 export * from './field/index';
 export { lengthUnits, frequencyUnits, toSi, fromSi, COPPER_OUNCE_THICKNESS, type LengthUnit, type FrequencyUnit, type TableUnit } from './units/length-units';
 export { parseQuantity } from './units/parse-quantity';
+export { solve, type SolveTarget, type SolveOptions, type SolveResult } from './solve/solve';
+export type { OutputQuantity } from './solve/numeric-fields';
+export { sweep, type SweepOptions, type SweepResult } from './sweep/sweep';
+export { tolerance, type Spread, type Spreads, type ToleranceOptions, type ToleranceResult, type Corner, type Sensitivity } from './tolerance/tolerance';
+export type { SampleStatistics, Histogram } from './tolerance/statistics';
