@@ -201,6 +201,6 @@ function estimatedDuration(circuit: NormalizedCircuit, band: number): number {
   const charging =
     load.capacitance * parallel(driveResistance, load.resistance) +
     (load.seriesRc ? load.seriesRc.capacitance * (load.seriesRc.resistance + parallel(driveResistance, load.resistance)) : 0);
-  const trips = Math.min(Math.max(roundTrips, line.isLossless ? 2 : 10), MAX_DEFAULT_ROUND_TRIPS);
+  const trips = Math.min(Math.max(roundTrips, line.isLossless ? 2 : 3), MAX_DEFAULT_ROUND_TRIPS);
   return (2 * trips + 1) * line.delay + 6 * charging + 4 * riseTime;
 }
