@@ -21,13 +21,14 @@ const COVER_DECAY = 1.55;
 
 /**
  * Static εeff of the strip under an infinitely thick cover: the substrate's share q of the
- * field (Hammerstad–Jensen filling factor of the uncovered line) stays in the substrate,
+ * field (the filling factor of the uncovered line, thickness included) stays in the substrate,
  * the rest is in the cover: εeff∞ = εc + q·(εr − εc). With εc = 1 this is the uncovered line.
  */
-function fullyCoveredErEff(u: number, er: number, erCover: number): number {
-  const erForFill = Math.max(er, erCover);
-  if (erForFill === 1) return 1;
-  const fill = (effectivePermittivity(u, erForFill) - 1) / (erForFill - 1);
+function fullyCoveredErEff(u: number, er: number, erCover: number, surfaceErEff: number): number {
+  if (er > 1) return erCover + ((surfaceErEff - 1) / (er - 1)) * (er - erCover);
+  // Air substrate: the share is taken from Hammerstad–Jensen with the cover's permittivity instead.
+  if (erCover === 1) return 1;
+  const fill = (effectivePermittivity(u, erCover) - 1) / (erCover - 1);
   return erCover + fill * (er - erCover);
 }
 
@@ -45,7 +46,7 @@ export function embeddedMicrostrip(spec: EmbeddedMicrostripSpec, warnings: strin
   const surfaceStatic = spec.frequency === undefined ? surface : microstripLine(spec.w, spec.h, spec.t, spec.er, undefined, []);
   const u = spec.w / spec.h;
   const coverShare = 1 - Math.exp((-COVER_DECAY * spec.cover) / spec.h);
-  const erEff = surface.erEff + (fullyCoveredErEff(u, spec.er, erCover) - surfaceStatic.erEff) * coverShare;
+  const erEff = surface.erEff + (fullyCoveredErEff(u, spec.er, erCover, surfaceStatic.erEff) - surfaceStatic.erEff) * coverShare;
   return { z0: surface.z0 * Math.sqrt(surface.erEff / erEff), erEff };
 }
 
