@@ -5,6 +5,7 @@
  */
 import type { Arrival } from './circuit';
 import { edge, EDGE_HALF_WIDTH_SIGMAS } from './edge';
+import { isResistiveLoad, type NormalizedCircuit } from './validate-circuit';
 
 /** Waves smaller than this fraction of the first one are dropped: they are below double precision of any level. */
 const NEGLIGIBLE_WAVE = 1e-16;
@@ -33,6 +34,15 @@ export interface Lattice {
 /** Reflection coefficient (R − Z0)/(R + Z0) of a resistance R at a line end; open (Infinity) is +1. */
 export function reflectionCoefficient(resistance: number, z0: number): number {
   return resistance === Infinity ? 1 : (resistance - z0) / (resistance + z0);
+}
+
+/** ΓS and ΓL from the nominal Z0 (ΓL null for a reactive load), as every method reports them. */
+export function nominalReflections(circuit: NormalizedCircuit): { source: number; load: number | null } {
+  const { z0 } = circuit.line;
+  return {
+    source: reflectionCoefficient(circuit.sourceResistance, z0),
+    load: isResistiveLoad(circuit.load) ? reflectionCoefficient(circuit.load.resistance, z0) : null,
+  };
 }
 
 /**

@@ -8,7 +8,7 @@ import type { EndResponse, StepCircuit, StepOptions, StepResponse } from './circ
 import { EDGE_HALF_WIDTH_SIGMAS, riseTimeOfSigma } from './edge';
 import { finalLevels, settleTolerance } from './final-levels';
 import { frequencyDomainWaveforms } from './frequency-domain';
-import { arrivalsOf, bounce, reflectionCoefficient, sampleSteps, stepsAt, type EndSteps } from './lattice';
+import { arrivalsOf, bounce, nominalReflections, reflectionCoefficient, sampleSteps, stepsAt, type EndSteps } from './lattice';
 import { settleTimeOfFunction, settleTimeOfSamples } from './settle';
 import {
   isResistiveLoad,
@@ -70,7 +70,8 @@ export function stepResponse(circuit: StepCircuit, options?: StepOptions): StepR
 const hasSettled = (response: StepResponse) =>
   Number.isFinite(response.source.settleTime) && Number.isFinite(response.load.settleTime);
 
-function timeAxis(riseTime: number, duration: number, points: number): { time: number[]; t0: number; dt: number } {
+/** Uniform samples from a few rise times before the edge's 50 % point to `duration`. */
+export function timeAxis(riseTime: number, duration: number, points: number): { time: number[]; t0: number; dt: number } {
   const t0 = -EDGE_LEAD_RISE_TIMES * riseTime;
   const dt = (duration - t0) / (points - 1);
   return { time: Array.from({ length: points }, (_, i) => t0 + i * dt), t0, dt };
@@ -170,17 +171,13 @@ function frequencyResponse(circuit: NormalizedCircuit, settings: NormalizedOptio
   if (!Number.isFinite(source.settleTime) || !Number.isFinite(load.settleTime)) {
     warnings.push(`The response has not settled within ${duration.toPrecision(3)} s; settleTime is Infinity.`);
   }
-  const { line, load: loadSpec } = circuit;
   return {
     time,
     source,
     load,
     arrivals: [],
     method: 'frequency-domain',
-    reflection: {
-      source: reflectionCoefficient(circuit.sourceResistance, line.z0),
-      load: isResistiveLoad(loadSpec) ? reflectionCoefficient(loadSpec.resistance, line.z0) : null,
-    },
+    reflection: nominalReflections(circuit),
     roundTripsToSettle: null,
     warnings,
   };
