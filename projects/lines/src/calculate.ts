@@ -15,6 +15,14 @@ import { validateSpec } from './validate-spec';
  * describe the odd (differential) mode.
  */
 export function calculate(spec: LineSpec): LineResult {
+  return calculateLine(spec, true);
+}
+
+/**
+ * calculate() with the loss outputs optional: tolerance and solve, which need only
+ * impedance and delay, skip the conductor-loss derivative (three times the work).
+ */
+export function calculateLine(spec: LineSpec, includeLosses: boolean): LineResult {
   const model = validateSpec(spec);
   let tanDelta = spec.tanDelta ?? 0;
   let lineSpec = spec;
@@ -51,8 +59,8 @@ export function calculate(spec: LineSpec): LineResult {
     result.erAtFrequency = lineSpec.er;
     result.tanDeltaAtFrequency = tanDelta;
   }
-  if (spec.frequency !== undefined) addLosses(result, model, lineSpec, line, tanDelta);
-  if (spec.length !== undefined) addTotals(result, spec.length, spec.frequency);
+  if (includeLosses && spec.frequency !== undefined) addLosses(result, model, lineSpec, line, tanDelta);
+  if (spec.length !== undefined) addTotals(result, spec.length, includeLosses ? spec.frequency : undefined);
   assertFinite(result);
   return result;
 }
@@ -66,7 +74,8 @@ function addTotals(result: LineResult, length: number, frequency: number | undef
 
 /** The contract is "never a silent NaN": a non-finite output is a bug, so say which. */
 function assertFinite(result: LineResult): void {
-  for (const [key, value] of Object.entries(result)) {
+  for (const key in result) {
+    const value = result[key as keyof LineResult];
     if (typeof value === 'number' && !Number.isFinite(value)) throw new Error(`internal: ${key} is not finite`);
   }
 }

@@ -44,6 +44,12 @@ const METHODS = [
   { id: 'ipc-2141', ...IPC_2141 },
 ] as const;
 
+/** Built once: the live calculator must not rebuild these strings per keystroke. */
+const DISPERSIVE_METHOD = {
+  name: `${HAMMERSTAD_JENSEN.name} with ${KIRSCHNING_JANSEN_DISPERSION.name}`,
+  citation: `${HAMMERSTAD_JENSEN.citation}; ${KIRSCHNING_JANSEN_DISPERSION.citation}`,
+};
+
 export const microstripModel: LineModel<MicrostripSpec> = {
   kind: 'microstrip',
   label: 'Microstrip',
@@ -69,12 +75,10 @@ export const microstripModel: LineModel<MicrostripSpec> = {
       for (const range of IPC_MICROSTRIP_VALIDITY) checkRange(warnings, range, range.quantity === 'er' ? spec.er : u);
       const line = ipcMicrostrip(spec.w, spec.h, spec.t, spec.er);
       if (!(line.z0 > 0)) throw new LineInputError('w', 'is too wide for the IPC-2141 quick formula (it gives Z0 ≤ 0)');
-      return { ...line, method: { name: method.name, citation: method.citation }, warnings };
+      return { z0: line.z0, erEff: line.erEff, method: IPC_2141, warnings };
     }
     const line = microstripLine(spec.w, spec.h, spec.t, spec.er, spec.frequency, warnings);
-    const name = spec.frequency === undefined ? method.name : `${method.name} with ${KIRSCHNING_JANSEN_DISPERSION.name}`;
-    const citation = spec.frequency === undefined ? method.citation : `${method.citation}; ${KIRSCHNING_JANSEN_DISPERSION.citation}`;
-    return { ...line, method: { name, citation }, warnings };
+    return { z0: line.z0, erEff: line.erEff, method: spec.frequency === undefined ? HAMMERSTAD_JENSEN : DISPERSIVE_METHOD, warnings };
   },
   recede(spec, recession) {
     return { ...spec, w: spec.w - 2 * recession, h: spec.h + 2 * recession, t: Math.max(0, spec.t - 2 * recession) };

@@ -44,6 +44,8 @@ export function conductorAttenuation<S extends LineSpec>(
 
 /** The kind's impedances with every dielectric replaced by air, quasi-static. */
 function airModes<S extends LineSpec>(model: LineModel<S>, spec: S): ModelOutput {
-  // erCover and dielectricStrength are cleared too: the air line has no cover and needs no voltage rating.
-  return model.compute({ ...spec, er: 1, erCover: 1, frequency: undefined, dielectricStrength: undefined } as S);
+  const air = { ...spec, er: 1, frequency: undefined };
+  // A cover is part of the dielectric, so it becomes air too.
+  if ('cover' in air) (air as { erCover?: number }).erCover = 1;
+  return model.compute(air);
 }

@@ -1,7 +1,7 @@
 /**
  * Synthesis: find the one input that makes an output hit a target.
  */
-import { calculate } from '../calculate';
+import { calculate, calculateLine } from '../calculate';
 import { LineInputError } from '../errors';
 import type { LineResult, LineSpec } from '../types';
 import { validateSpec } from '../validate-spec';
@@ -55,7 +55,8 @@ export function solve<S extends LineSpec>(spec: S, unknown: string, target: Solv
   requireOutputQuantity(target.quantity);
   if (!Number.isFinite(target.value)) throw new LineInputError('value', 'the target must be a finite number');
   const [min, max] = searchRange(spec, unknown, options);
-  const objective = (x: number): number => outputValue(calculate(withField(spec, unknown, x)), target.quantity) - target.value;
+  const needsLosses = target.quantity === 'lossDbPerMeter';
+  const objective = (x: number): number => outputValue(calculateLine(withField(spec, unknown, x), needsLosses), target.quantity) - target.value;
 
   const ratio = Math.pow(max / min, 1 / (SCAN_POINTS - 1));
   let previous: { x: number; f: number } | undefined;

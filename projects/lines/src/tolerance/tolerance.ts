@@ -2,7 +2,7 @@
  * Fabrication tolerance: how z0 (zDiff for pairs) and delay spread when the
  * inputs vary within ± limits.
  */
-import { calculate } from '../calculate';
+import { calculate, calculateLine } from '../calculate';
 import { LineInputError } from '../errors';
 import { fieldValue, requireNumericField, withField } from '../solve/numeric-fields';
 import type { LineResult, LineSpec } from '../types';
@@ -139,7 +139,7 @@ function readLimit(spec: LineSpec, field: string, spread: Spread): Limit {
 
 function tryCalculate(spec: LineSpec): LineResult | undefined {
   try {
-    return calculate(spec);
+    return calculateLine(spec, false);
   } catch (error) {
     // A draw can be physically impossible (e.g. s ≤ d at the edge of wide limits): it is skipped and counted.
     if (error instanceof LineInputError) return undefined;
@@ -149,8 +149,8 @@ function tryCalculate(spec: LineSpec): LineResult | undefined {
 
 function sensitivity(spec: LineSpec, limit: Limit, impedanceOf: (result: LineResult) => number): Sensitivity {
   const step = DERIVATIVE_STEP * (limit.limit || Math.abs(limit.nominal) || 1);
-  const up = calculate(withField(spec, limit.field, limit.nominal + step));
-  const down = calculate(withField(spec, limit.field, limit.nominal - step));
+  const up = calculateLine(withField(spec, limit.field, limit.nominal + step), false);
+  const down = calculateLine(withField(spec, limit.field, limit.nominal - step), false);
   const impedancePerUnit = (impedanceOf(up) - impedanceOf(down)) / (2 * step);
   return {
     field: limit.field,
@@ -168,7 +168,7 @@ function worstCorners(spec: LineSpec, limits: Limit[], sensitivities: Sensitivit
     signSets.push(sensitivities.map((entry) => Math.sign(entry.impedancePerUnit) || 1), sensitivities.map((entry) => -(Math.sign(entry.impedancePerUnit) || 1)));
     signSets.push(sensitivities.map((entry) => Math.sign(entry.delayPerUnit) || 1), sensitivities.map((entry) => -(Math.sign(entry.delayPerUnit) || 1)));
   }
-  const nominal = calculate(spec);
+  const nominal = calculateLine(spec, false);
   const start: Corner = { value: impedanceOf(nominal), inputs: {} };
   const corners = { impedanceLow: start, impedanceHigh: start, delayLow: { ...start, value: nominal.delayPerMeter }, delayHigh: { ...start, value: nominal.delayPerMeter } };
   for (const signs of signSets) {

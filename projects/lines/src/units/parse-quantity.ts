@@ -3,14 +3,25 @@
  * "1 oz", "2.4 GHz") into an SI number. The only module that loads mathjs, so
  * the hot path (calculate) never does.
  */
-import { all, create, type Unit } from 'mathjs';
+import { all, create, type MathJsInstance, type Unit } from 'mathjs';
 import { LineInputError } from '../errors';
 import type { FieldQuantity } from '../kinds/line-model';
 import { COPPER_OUNCE_THICKNESS } from './length-units';
 
-const math = create(all);
-// mathjs's 'oz' is the mass ounce; copper weight gets its own unit, and "oz" in input is mapped to it below.
-math.createUnit('copperOunce', `${COPPER_OUNCE_THICKNESS} m`);
+let instance: MathJsInstance | undefined;
+
+/**
+ * The mathjs instance, made on first use: nothing runs at import time, so a browser
+ * bundle that never parses text can drop mathjs entirely (it is marked side-effect free).
+ */
+function mathjs(): MathJsInstance {
+  if (!instance) {
+    instance = create(all);
+    // mathjs's 'oz' is the mass ounce; copper weight gets its own unit, and "oz" in input is mapped to it below.
+    instance.createUnit('copperOunce', `${COPPER_OUNCE_THICKNESS} m`);
+  }
+  return instance;
+}
 
 /** The SI unit each dimensional field quantity is returned in. */
 const SI_UNITS: Partial<Record<FieldQuantity, string>> = {
@@ -42,7 +53,7 @@ export function parseQuantity(text: string, quantity: FieldQuantity, field = 'va
   const siUnit = SI_UNITS[quantity];
   if (!siUnit) throw new LineInputError(field, 'must be a plain number (this quantity has no unit)');
   const unit = readUnit(normalise(input), field);
-  if (!unit.equalBase(math.unit(siUnit))) throw new LineInputError(field, `must be a ${quantity} (e.g. in ${siUnit})`);
+  if (!unit.equalBase(mathjs().unit(siUnit))) throw new LineInputError(field, `must be a ${quantity} (e.g. in ${siUnit})`);
   return unit.toNumber(siUnit);
 }
 
@@ -50,7 +61,7 @@ function parsePerLength(input: string, field: string): number {
   const match = PER_LENGTH.exec(input);
   if (!match || !BARE_NUMBER.test(match[1].trim())) throw new LineInputError(field, 'must be a count per length, e.g. 30 /m');
   const unit = readUnit(`1 ${normalise(match[2])}`, field);
-  if (!unit.equalBase(math.unit('m'))) throw new LineInputError(field, 'must be a count per length, e.g. 30 /m');
+  if (!unit.equalBase(mathjs().unit('m'))) throw new LineInputError(field, 'must be a count per length, e.g. 30 /m');
   return Number(match[1]) / unit.toNumber('m');
 }
 
@@ -61,7 +72,7 @@ function normalise(input: string): string {
 
 function readUnit(input: string, field: string): Unit {
   try {
-    return math.unit(input);
+    return mathjs().unit(input);
   } catch {
     // mathjs throws a plain SyntaxError for text it cannot read; callers need the typed error with the field.
     throw new LineInputError(field, 'must be a number with a known unit, e.g. 5 mil, 0.2 mm, 1 oz, 2.4 GHz');
