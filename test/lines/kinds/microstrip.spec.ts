@@ -47,6 +47,15 @@ describe('microstrip (Hammerstad–Jensen 1980)', () => {
     expectClose(result.lPerMeter * result.cPerMeter * 299_792_458 ** 2, result.erEff, EXACT, 'LC c0²');
   });
 
+  it('the IPC-2141 method stays within 5 % of Hammerstad–Jensen inside its range and strays far outside it (IPC-2141A claims only a narrow range)', () => {
+    const inside = { ...board, w: board.h, t: 17e-6 };
+    expectClose(calculate({ ...inside, method: 'ipc-2141' }).z0, calculate(inside).z0, 0.05, 'inside');
+    const wide = { ...board, w: 5 * board.h, t: 17e-6 };
+    const error = Math.abs(calculate({ ...wide, method: 'ipc-2141' }).z0 / calculate(wide).z0 - 1);
+    expect(error).to.be.above(0.1);
+    expect(calculate({ ...wide, method: 'ipc-2141' }).warnings.join(' ')).to.contain('IPC-2141A');
+  });
+
   it('warns when w/h is outside 0.01–100, the published range', () => {
     const result = calculate({ ...board, w: 0.001 * board.h });
     expect(result.warnings.join(' ')).to.contain('w/h').and.to.contain('0.01–100');

@@ -95,6 +95,8 @@ export const cpwModel: LineModel<CpwSpec> = {
     return { ...coplanarWaveguide(spec.w, spec.g, spec.h, spec.t, spec.er, spec.grounded === true), method: METHOD, warnings };
   },
   recede(spec, recession) {
-    return { ...spec, w: spec.w - 2 * recession, g: spec.g + 2 * recession, h: spec.h + 2 * recession, t: Math.max(0, spec.t - 2 * recession) };
+    // h is a conductor spacing only when a backing plane is there; otherwise its far side is bare dielectric.
+    const h = spec.grounded === true ? spec.h + 2 * recession : spec.h;
+    return { ...spec, w: spec.w - 2 * recession, g: spec.g + 2 * recession, h, t: Math.max(0, spec.t - 2 * recession) };
   },
 };
