@@ -185,7 +185,7 @@ function frequencyResponse(circuit: NormalizedCircuit, settings: NormalizedOptio
 
 /**
  * A first guess at the time to settle: the round trips a lattice with the
- * resistive parts would need, plus six time constants of any load
+ * resistive parts would need, plus ln(1/band) + 1 time constants of any load
  * capacitance charging through the larger of Z0 and the source side.
  */
 function estimatedDuration(circuit: NormalizedCircuit, band: number): number {
@@ -199,5 +199,6 @@ function estimatedDuration(circuit: NormalizedCircuit, band: number): number {
     load.capacitance * parallel(driveResistance, load.resistance) +
     (load.seriesRc ? load.seriesRc.capacitance * (load.seriesRc.resistance + parallel(driveResistance, load.resistance)) : 0);
   const trips = Math.min(Math.max(roundTrips, line.isLossless ? 2 : 3), MAX_DEFAULT_ROUND_TRIPS);
-  return (2 * trips + 1) * line.delay + 6 * charging + 4 * riseTime;
+  // ln(1/band) time constants bring an exponential within the band; one more for the line's own steps.
+  return (2 * trips + 1) * line.delay + (Math.log(1 / band) + 1) * charging + 4 * riseTime;
 }
