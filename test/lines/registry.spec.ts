@@ -40,6 +40,8 @@ describe('kind registry', () => {
 describe('validateSpec', () => {
   it('throws LineInputError for an unknown kind and an unknown method', () => {
     expect(() => validateSpec({ kind: 'waveguide' } as unknown as LineSpec)).to.throw(LineInputError).with.property('field', 'kind');
+    expect(() => validateSpec({ kind: 'toString' } as unknown as LineSpec)).to.throw(LineInputError).with.property('field', 'kind');
+    expect(() => validateSpec(null as unknown as LineSpec)).to.throw(LineInputError).with.property('field', 'kind');
     expect(() => validateSpec({ ...defaultSpec('microstrip'), method: 'guess' } as LineSpec)).to.throw(LineInputError).with.property('field', 'method');
   });
 

@@ -80,7 +80,7 @@ export function kindLabel(kind: LineKind): string {
 
 /** The model computing `kind`; throws LineInputError('kind') for an unknown kind. */
 export function lineModel<S extends LineSpec>(kind: S['kind']): LineModel<S> {
-  const model = (models as Record<string, unknown>)[kind];
-  if (!model) lineKind(kind);
-  return model as LineModel<S>;
+  // Own properties only: a kind such as 'toString' must be refused, not found on Object.prototype.
+  if (typeof kind !== 'string' || !Object.hasOwn(models, kind)) lineKind(String(kind));
+  return (models as Record<string, unknown>)[kind] as LineModel<S>;
 }
