@@ -1,11 +1,10 @@
 import { ChangeDetectionStrategy, Component, computed, inject, signal, untracked, type WritableSignal } from '@angular/core';
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
-import { MatCardModule } from '@angular/material/card';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSlideToggleModule } from '@angular/material/slide-toggle';
-import { ESTIMATE_NOTE, calculate, lineKind, type LineKind, type LineResult, type LineSpec } from '@linewright/lines';
+import { ESTIMATE_NOTE, calculate, lineKind, solve, type LineKind, type LineResult, type LineSpec } from '@linewright/lines';
 import { catchError, debounceTime, map, of, startWith, switchMap } from 'rxjs';
 import { QuantityField } from '../shared/quantity-field';
 import { CalculateApi } from './calculate-api';
@@ -13,8 +12,15 @@ import { KIND_GROUPS } from './kind-groups';
 import { buildLineForm, initialUnit, specFromForm, type LineForm, type UnitMap } from './line-form';
 import { LineReadout } from './line-readout';
 import { ServerCheck, type ServerCheckState } from './server-check';
+import { CrossSectionDrawing } from '../shared/section-drawing/cross-section-drawing';
+import { MatTabsModule } from '@angular/material/tabs';
+import { MatInputModule } from '@angular/material/input';
+import { solveTargets } from './solve-targets';
+import { SweepPanel } from './sweep-panel';
+import { SpreadPanel } from './spread-panel';
+import { HandOffPanel } from './hand-off-panel';
 
-type Outcome = { result: LineResult; error?: undefined } | { result?: undefined; error: string };
+type Outcome = { result: LineResult; spec: LineSpec; solved?: number; error?: undefined } | { result?: undefined; spec?: undefined; solved?: undefined; error: string };
 
 const FIELD_GROUPS = [
   { id: 'geometry', label: 'Cross-section' },
@@ -27,7 +33,21 @@ const SERVER_CHECK_DELAY_MS = 400;
 
 @Component({
   selector: 'lw-calculate-page',
-  imports: [ReactiveFormsModule, MatCardModule, MatFormFieldModule, MatSelectModule, MatSlideToggleModule, QuantityField, LineReadout, ServerCheck],
+  imports: [
+    ReactiveFormsModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    MatSlideToggleModule,
+    MatTabsModule,
+    QuantityField,
+    LineReadout,
+    ServerCheck,
+    CrossSectionDrawing,
+    SweepPanel,
+    SpreadPanel,
+    HandOffPanel,
+  ],
   templateUrl: './calculate-page.html',
   styleUrl: './calculate-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -57,20 +77,43 @@ export class CalculatePage {
     { initialValue: {} as Record<string, number | null> },
   );
 
-  protected readonly spec = computed<LineSpec | undefined>(() =>
-    specFromForm(this.description(), this.values(), this.units(), this.flags(), this.method()),
+  /** "Solve for": the input that becomes the unknown, and the target it must meet. */
+  protected readonly unknown = signal<string | undefined>(undefined);
+  protected readonly targets = computed(() => solveTargets(this.description().isCoupled));
+  protected readonly targetQuantity = signal<string>('z0');
+  protected readonly targetValue = signal<number | null>(50);
+  protected readonly target = computed(() => this.targets().find((choice) => choice.quantity === this.targetQuantity()) ?? this.targets()[0]);
+  protected readonly solvableFields = computed(() =>
+    this.description().fields.filter((field) => field.quantity !== 'boolean' && !field.isOptional),
+  );
+
+  /** The spec as typed; with an unknown, its value is only the solver's starting point. */
+  private readonly typedSpec = computed<LineSpec | undefined>(() =>
+    specFromForm(this.description(), this.values(), this.units(), this.flags(), this.method(), this.unknown()),
   );
 
   /** Computed in the browser from the shared library on every change. */
   protected readonly outcome = computed<Outcome | undefined>(() => {
-    const spec = this.spec();
+    const spec = this.typedSpec();
     if (!spec) return undefined;
+    const unknown = this.unknown();
+    const targetValue = this.targetValue();
     try {
-      return { result: calculate(spec) };
+      if (!unknown) return { result: calculate(spec), spec };
+      if (targetValue === null || !Number.isFinite(targetValue)) return { error: 'Enter the target value to solve for.' };
+      const solution = solve(spec, unknown, { quantity: this.target().quantity, value: targetValue * this.target().factor });
+      return { result: solution.result, spec: solution.spec, solved: solution.value };
     } catch (error) {
-      // The library throws a typed error naming the field; show it instead of a result.
+      // The library throws a typed error naming the field (or the unreachable target); show it instead of a result.
       return { error: error instanceof Error ? error.message : String(error) };
     }
+  });
+
+  /** The complete spec behind the shown result (with a solved unknown filled in). */
+  protected readonly spec = computed(() => this.outcome()?.spec);
+  protected readonly lengthUnit = computed(() => {
+    const unit = this.units()['w'] ?? this.units()['d'] ?? 'mm';
+    return unit === '' || unit === 'oz' ? 'mm' : unit;
   });
 
   protected readonly serverCheck = toSignal(
@@ -97,7 +140,23 @@ export class CalculatePage {
   }
 
   protected selectKind(kind: LineKind): void {
+    this.unknown.set(undefined);
     this.kind.set(kind);
+    this.targetQuantity.set(this.targets()[0].quantity);
+    this.targetValue.set(this.targets()[0].typical);
+  }
+
+  protected setUnknown(field: string | undefined): void {
+    this.unknown.set(field || undefined);
+  }
+
+  protected setTargetQuantity(quantity: string): void {
+    this.targetQuantity.set(quantity);
+    this.targetValue.set(this.target().typical);
+  }
+
+  protected setTargetValue(text: string): void {
+    this.targetValue.set(text === '' ? null : Number(text));
   }
 
   protected setMethod(method: string): void {

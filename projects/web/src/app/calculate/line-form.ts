@@ -61,11 +61,17 @@ export function specFromForm(
   units: UnitMap,
   flags: Record<string, boolean>,
   method?: string,
+  unknown?: string,
 ): LineSpec | undefined {
   const spec: Record<string, unknown> = { kind: kind.kind as LineKind };
   for (const field of kind.fields) {
     if (field.quantity === 'boolean') {
       if (flags[field.name]) spec[field.name] = true;
+      continue;
+    }
+    if (field.name === unknown) {
+      // The unknown's own value only starts the search; the solver replaces it.
+      spec[field.name] = typeof field.defaultValue === 'number' ? field.defaultValue : 1;
       continue;
     }
     const value = values[field.name];

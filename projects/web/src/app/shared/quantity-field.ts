@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, input, model } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, input, model, untracked } from '@angular/core';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
@@ -18,6 +18,7 @@ import { trimmed } from './engineering-format';
     <mat-form-field appearance="outline" subscriptSizing="dynamic">
       <mat-label>{{ field().label }}</mat-label>
       <input matInput type="number" step="any" [formControl]="control()" [attr.name]="field().name"
+             [readonly]="solvedShown() !== undefined" [class.solved]="solvedShown() !== undefined"
              [attr.aria-describedby]="field().name + '-hint'" />
       @if (choices().length > 0) {
         <select matTextSuffix class="unit" (change)="changeUnit($any($event.target).value)"
@@ -29,7 +30,7 @@ import { trimmed } from './engineering-format';
       } @else if (fixedUnit()) {
         <span matTextSuffix class="unit-fixed">{{ fixedUnit() }}</span>
       }
-      <mat-hint [id]="field().name + '-hint'">{{ field().description }}</mat-hint>
+      <mat-hint [id]="field().name + '-hint'">{{ solvedShown() ? 'Solved for the target — change the other inputs freely.' : field().description }}</mat-hint>
       @if (control().hasError('required')) {
         <mat-error>Enter a value.</mat-error>
       } @else if (control().hasError('min')) {
@@ -52,6 +53,7 @@ import { trimmed } from './engineering-format';
     }
     .unit:focus-visible { outline: 2px solid var(--mat-sys-primary); border-radius: 4px; }
     .unit option { color: initial; }
+    .solved { font-weight: 600; color: var(--mat-sys-primary); }
     .unit-fixed { color: var(--mat-sys-on-surface-variant); padding-left: 4px; }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -61,11 +63,25 @@ export class QuantityField {
   readonly control = input.required<FormControl<number | null>>();
   /** The shown unit ('' for dimensionless fields). */
   readonly unit = model<TableUnit | ''>('');
+  /** When this field is the unknown being solved for: its solved value, SI. */
+  readonly solved = input<number | undefined>();
 
   protected readonly choices = computed(() => unitChoices(this.field().quantity, this.field().name));
   protected readonly fixedUnit = computed(() => fixedUnitLabel(this.field().quantity));
+  protected readonly solvedShown = computed(() => {
+    const solved = this.solved();
+    return solved === undefined ? undefined : trimmed(solved / unitFactor(this.unit()), 5);
+  });
   protected readonly minShown = computed(() => this.shown(this.field().min));
   protected readonly maxShown = computed(() => this.shown(this.field().max));
+
+  constructor() {
+    // The solved value is shown in the field itself; without an event, so it never feeds back into the solve.
+    effect(() => {
+      const shown = this.solvedShown();
+      if (shown !== undefined) untracked(() => this.control().setValue(Number(shown), { emitEvent: false }));
+    });
+  }
 
   protected changeUnit(next: TableUnit): void {
     const value = this.control().value;
