@@ -7,10 +7,23 @@
 import { add, complex, divide, exp, multiply, scale, sqrt, subtract, type Complex } from './complex';
 import { edgePulseSpectrum } from './edge';
 import { inverseFft } from './fft';
+import type { LineTransfer } from './line-transfer';
 import type { NormalizedCircuit, NormalizedLoad } from './validate-circuit';
 
 /** Aliasing from the FFT's period is damped to e^(−c·T) = 1e−8 of the response. */
 const ALIASING_DAMPING = Math.log(1e8);
+
+/** What the two-port solution needs of a line: γℓ and the characteristic impedance at complex frequency s. */
+export type Propagation = (s: Complex) => { gammaLength: Complex; zc: Complex };
+
+/** The distributed line: γℓ = √(z·y), Zc = z/γℓ (= √(z/y)) from the whole line's z(s) and y(s). */
+export function distributedPropagation(line: LineTransfer): Propagation {
+  return (s) => {
+    const { z, y } = line.impedances(s);
+    const gammaLength = sqrt(multiply(z, y));
+    return { gammaLength, zc: divide(z, gammaLength) };
+  };
+}
 
 export interface EndWaveforms {
   voltage: number[];
@@ -38,6 +51,7 @@ export interface EndWaveforms {
  */
 export function frequencyDomainWaveforms(
   circuit: NormalizedCircuit,
+  propagation: Propagation,
   sigma: number,
   t0: number,
   dt: number,
@@ -52,7 +66,7 @@ export function frequencyDomainWaveforms(
     const s = complex(c, (2 * Math.PI * k) / period);
     // Vs·E(s)/s, delayed by −t0 so that the FFT's time origin is the first sample.
     const drive = scale(divide(multiply(edgePulseSpectrum(s, sigma), exp(scale(s, t0))), s), circuit.amplitude);
-    const ends = twoPort(circuit, s, zs);
+    const ends = twoPort(circuit, propagation(s), s, zs);
     const quantities = [ends.v1, ends.i1, ends.v2, ends.i2];
     for (let q = 0; q < 4; q++) {
       const value = multiply(drive, quantities[q]);
@@ -75,10 +89,8 @@ export function frequencyDomainWaveforms(
 }
 
 /** Voltages and currents at both ends per volt of source, at complex frequency s. */
-function twoPort(circuit: NormalizedCircuit, s: Complex, zs: Complex) {
-  const { z, y } = circuit.line.impedances(s);
-  const gammaLength = sqrt(multiply(z, y));
-  const zc = divide(z, gammaLength);
+function twoPort(circuit: NormalizedCircuit, line: { gammaLength: Complex; zc: Complex }, s: Complex, zs: Complex) {
+  const { gammaLength, zc } = line;
   const p = exp(scale(gammaLength, -1));
   const p2 = multiply(p, p);
   const even = scale(add(complex(1), p2), 0.5);

@@ -1,8 +1,8 @@
 /**
  * The line as the time-domain solvers see it: nominal Z0 and delay for the
  * lattice, the whole line's series impedance z(s) and shunt admittance y(s)
- * at complex frequency s for the frequency-domain solution, and lumped totals
- * for the ladder. Quantities are totals for the whole line, so per-metre
+ * at complex frequency s for the frequency-domain solution and the ladder.
+ * Quantities are totals for the whole line, so per-metre
  * values never appear: γℓ = √(z·y) and Zc = √(z/y).
  */
 import { calculate } from '../calculate';
@@ -18,14 +18,6 @@ const DIELECTRIC_HIGH_FREQUENCY = 1e12;
 /** Knee frequency ≈ 0.35/riseTime: the 3 dB bandwidth of a one-pole system with that 10–90 % time, ln 9/(2π). */
 const KNEE_FACTOR = Math.log(9) / (2 * Math.PI);
 
-export interface LumpedTotals {
-  /** Series resistance [Ω], inductance [H], shunt conductance [S] and capacitance [F] of the whole line. */
-  resistance: number;
-  inductance: number;
-  conductance: number;
-  capacitance: number;
-}
-
 export interface LineTransfer {
   z0: number;
   delay: number;
@@ -34,7 +26,6 @@ export interface LineTransfer {
   dcResistance: number;
   /** Whole-line series impedance z and shunt admittance y at complex frequency s [1/s]. */
   impedances(s: Complex): { z: Complex; y: Complex };
-  lumped: LumpedTotals;
   warnings: string[];
 }
 
@@ -100,12 +91,6 @@ function directLineTransfer(line: LossyLine): LineTransfer {
       z: add(scale(s, inductance), sqrt(add(complex(dcResistance * dcResistance), scale(s, skinSquaredPerS)))),
       y: multiply(s, dielectric(s)),
     }),
-    lumped: {
-      resistance: dcResistance + skinResistance,
-      inductance,
-      conductance: omegaRef * capacitance * tanDelta,
-      capacitance,
-    },
     warnings,
   };
 }

@@ -7,7 +7,7 @@ import { LineInputError } from '../errors';
 import type { EndResponse, StepCircuit, StepOptions, StepResponse } from './circuit';
 import { EDGE_HALF_WIDTH_SIGMAS, riseTimeOfSigma } from './edge';
 import { finalLevels, settleTolerance } from './final-levels';
-import { frequencyDomainWaveforms } from './frequency-domain';
+import { distributedPropagation, frequencyDomainWaveforms, type Propagation } from './frequency-domain';
 import { arrivalsOf, bounce, nominalReflections, reflectionCoefficient, sampleSteps, stepsAt, type EndSteps } from './lattice';
 import { settleTimeOfFunction, settleTimeOfSamples } from './settle';
 import {
@@ -50,12 +50,6 @@ export function stepResponse(circuit: StepCircuit, options?: StepOptions): StepR
       throw new LineInputError('options.method', 'the lattice solution needs a lossless line and a resistive load');
     }
     return latticeResponse(normalized, settings);
-  }
-  if (normalized.riseTime === 0) {
-    throw new LineInputError(
-      'source.riseTime',
-      'must be greater than zero for a lossy line or a reactive load: an ideal step has unlimited bandwidth',
-    );
   }
   if (settings.duration !== undefined) return frequencyResponse(normalized, settings, settings.duration);
   let duration = estimatedDuration(normalized, settings.band);
@@ -149,7 +143,23 @@ function latticeSettleTime(steps: EndSteps, final: number, tolerance: number, si
   return { time: settleTimeOfFunction(value, final, tolerance, t0, endTime, sigma / 4), stepsBefore: next };
 }
 
-function frequencyResponse(circuit: NormalizedCircuit, settings: NormalizedOptions, duration: number): StepResponse {
+/**
+ * The frequency-domain solution on `settings.points` samples to `duration`,
+ * for the distributed line or (from ladder.ts) any other two-port.
+ */
+export function frequencyResponse(
+  circuit: NormalizedCircuit,
+  settings: NormalizedOptions,
+  duration: number,
+  propagation: Propagation = distributedPropagation(circuit.line),
+  method: 'frequency-domain' | 'ladder' = 'frequency-domain',
+): StepResponse {
+  if (circuit.riseTime === 0) {
+    throw new LineInputError(
+      'source.riseTime',
+      `must be greater than zero for the ${method} solution (a lossy line, a reactive load or a ladder): an ideal step has unlimited bandwidth`,
+    );
+  }
   const { time, t0, dt } = timeAxis(circuit.riseTime, duration, settings.points);
   const warnings = [...circuit.line.warnings];
   let sigma = circuit.sigma;
@@ -160,7 +170,7 @@ function frequencyResponse(circuit: NormalizedCircuit, settings: NormalizedOptio
         `${settings.points} samples over ${duration.toPrecision(3)} s resolve it; raise options.points or shorten options.duration.`,
     );
   }
-  const waves = frequencyDomainWaveforms(circuit, sigma, t0, dt, settings.points);
+  const waves = frequencyDomainWaveforms(circuit, propagation, sigma, t0, dt, settings.points);
   const final = finalLevels(circuit);
   const end = (voltage: number[], current: number[], level: number): EndResponse => {
     const settleTime = settleTimeOfSamples(time, voltage, level, settleTolerance(settings.band, level, circuit.amplitude));
@@ -176,7 +186,7 @@ function frequencyResponse(circuit: NormalizedCircuit, settings: NormalizedOptio
     source,
     load,
     arrivals: [],
-    method: 'frequency-domain',
+    method,
     reflection: nominalReflections(circuit),
     roundTripsToSettle: null,
     warnings,
