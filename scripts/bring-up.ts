@@ -4,6 +4,8 @@
  */
 import { loadConfig, type Config } from '../server/config';
 import { createDatabase, migrateAndSeed } from '../server/database';
+import { CaughtMailStore } from '../server/mail/caught-mail-store';
+import { startMailCatcher, type RunningMailCatcher } from '../server/mail/mail-catcher';
 import { ensureDatabase, startPrivateMariaDb, type RunningMariaDb } from './private-mariadb';
 import { bootstrapSettings, type Purpose } from './environment';
 
@@ -11,6 +13,7 @@ export interface Stack {
   env: NodeJS.ProcessEnv;
   config: Readonly<Config>;
   mariadb: RunningMariaDb;
+  mailCatcher: RunningMailCatcher;
   stop(): Promise<void>;
 }
 
@@ -28,5 +31,24 @@ export async function bringUpDatabase(purpose: Purpose, log: (line: string) => v
     await db.destroy();
   }
   log(`Database "${config.database.name}" migrated and seeded`);
-  return { env, config, mariadb, stop: () => mariadb.stop() };
+  // Tests and benchmarks start with an empty mailbox; `npm start` keeps what it caught before.
+  if (purpose !== 'start') new CaughtMailStore(config.mailCatcherDir).clear();
+  let mailCatcher: RunningMailCatcher;
+  try {
+    mailCatcher = await startMailCatcher({ port: config.smtp.port, dir: config.mailCatcherDir });
+  } catch (error) {
+    await mariadb.stop();
+    throw new Error(`The local mail catcher could not listen on 127.0.0.1:${config.smtp.port}: ${(error as Error).message}`);
+  }
+  log(`Mail catcher on 127.0.0.1:${config.smtp.port} (caught mail: ${config.mailCatcherDir})`);
+  return {
+    env,
+    config,
+    mariadb,
+    mailCatcher,
+    async stop() {
+      await mailCatcher.stop();
+      await mariadb.stop();
+    },
+  };
 }

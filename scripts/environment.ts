@@ -31,6 +31,7 @@ export function bootstrapSettings(purpose: Purpose): BootstrapSettings {
     const override = isStart ? process.env[name] : process.env[`${purpose.toUpperCase()}_${name}`];
     env[name] = override || value;
   }
+  env['MAIL_CATCHER_DIR'] ||= join(PROJECT_ROOT, '.data', isStart ? 'mail' : `mail-${purpose}`);
   if (!isStart) env['LOG_LEVEL'] = process.env['LOG_LEVEL'] || 'silent';
   return { dataRoot: join(PROJECT_ROOT, '.data', isStart ? 'mariadb' : `mariadb-${purpose}`), env };
 }

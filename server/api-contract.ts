@@ -16,6 +16,7 @@ export const OPENAPI_PATH = fileURLToPath(new URL('../openapi/openapi.yaml', imp
 
 type Schema = Record<string, unknown>;
 interface Parameter {
+  $ref?: string;
   name: string;
   in: 'query' | 'path' | 'header' | 'cookie';
   required?: boolean;
@@ -28,7 +29,7 @@ interface Operation {
 }
 export interface OpenApiDocument {
   paths: Record<string, Record<string, Operation>>;
-  components: { schemas: Record<string, Schema> };
+  components: { schemas: Record<string, Schema>; parameters?: Record<string, Parameter> };
   [key: string]: unknown;
 }
 
@@ -139,8 +140,17 @@ export class ApiContract {
     };
   }
 
+  /** A parameter given as `$ref: '#/components/parameters/Name'` is shared by several operations. */
+  private resolved(parameter: Parameter): Parameter {
+    if (!parameter.$ref) return parameter;
+    const name = parameter.$ref.replace('#/components/parameters/', '');
+    const shared = this.document.components.parameters?.[name];
+    if (!shared) throw new Error(`OpenAPI has no parameter "${name}".`);
+    return shared;
+  }
+
   private parameterValidator(operation: Operation, location: 'query' | 'path'): ValidateFunction | undefined {
-    const parameters = (operation.parameters ?? []).filter((parameter) => parameter.in === location);
+    const parameters = (operation.parameters ?? []).map((parameter) => this.resolved(parameter)).filter((parameter) => parameter.in === location);
     if (parameters.length === 0) return undefined;
     const schema: Schema = {
       type: 'object',

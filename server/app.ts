@@ -16,15 +16,19 @@ import { ApiContract, OPENAPI_PATH } from './api-contract';
 import { Problem, problemHandler } from './errors';
 import { healthRoutes } from './system/health-routes';
 import { calculationRoutes } from './calculation/calculation-routes';
+import { buildFeatures } from './features';
+import type { Mailer } from './mail/mail-transport';
 
 export interface AppDependencies {
   config: Readonly<Config>;
   db: Knex;
   logger: Logger;
   contract?: ApiContract;
+  /** Outgoing mail; SMTP per config unless a test hands in another. */
+  mailer?: Mailer;
 }
 
-export function createApp({ config, db, logger, contract = new ApiContract() }: AppDependencies): Express {
+export function createApp({ config, db, logger, contract = new ApiContract(), mailer }: AppDependencies): Express {
   const app = express();
   const version = (contract.document['info'] as { version: string }).version;
   app.disable('x-powered-by');
@@ -36,7 +40,8 @@ export function createApp({ config, db, logger, contract = new ApiContract() }: 
 
   const api = express.Router();
   api.use(healthRoutes(contract, db, version));
-  api.use(calculationRoutes(contract));
+  api.use(calculationRoutes(contract, config));
+  api.use(buildFeatures({ config, db, contract, mailer }));
   api.use(() => {
     throw Problem.notFound('No such API route.');
   });

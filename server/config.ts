@@ -13,6 +13,10 @@ export interface Config {
   /** Lifetime of a sign-in token [s]. */
   jwtLifetimeSeconds: number;
   smtp: { host: string; port: number; from: string };
+  /** Where the local SMTP catcher stores caught mail (development and tests only). */
+  mailCatcherDir: string;
+  /** Requests per window allowed per client address on sign-in and on password-reset requests. */
+  rateLimits: { windowSeconds: number; login: number; passwordReset: number };
   /** Directory of the built Angular client; served when it exists. */
   clientDir: string;
   limits: { bodyBytes: number; sweepPoints: number; csvBytes: number };
@@ -54,6 +58,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Readonly<Confi
       host: env['SMTP_HOST'] || '127.0.0.1',
       port: integer(env, 'SMTP_PORT', 2525),
       from: env['MAIL_FROM'] || 'Linewright <linewright@localhost>',
+    }),
+    mailCatcherDir: env['MAIL_CATCHER_DIR'] || '.data/mail',
+    rateLimits: Object.freeze({
+      windowSeconds: integer(env, 'RATE_LIMIT_WINDOW_SECONDS', 15 * 60),
+      login: integer(env, 'LOGIN_RATE_LIMIT', 10),
+      passwordReset: integer(env, 'RESET_RATE_LIMIT', 5),
     }),
     clientDir: env['CLIENT_DIR'] || 'dist/web/browser',
     limits: Object.freeze({

@@ -3,7 +3,12 @@
  * the library only ever sees SI numbers. Each field's quantity comes from the
  * library's own field descriptions, so "5 mil" is refused for a frequency.
  */
-import { LineInputError, kindFields, parseQuantity, type LineSpec } from '@linewright/lines';
+import { LineInputError, kindFields, parseQuantity, type FieldQuantity, type LineSpec } from '@linewright/lines';
+
+/** One quantity (an SI number, or text such as "1 GHz") as an SI number; `field` is its request path. */
+export function siValue(value: number | string, quantity: FieldQuantity, field: string): number {
+  return typeof value === 'number' ? value : parseQuantity(value, quantity, field);
+}
 
 export function specToSi(input: Record<string, unknown>, path = 'spec'): LineSpec {
   const fields = new Map(kindFields(input['kind'] as LineSpec['kind']).map((field) => [field.name, field]));

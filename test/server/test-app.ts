@@ -18,7 +18,8 @@ let shared: TestApp | undefined;
 
 export function testApp(): TestApp {
   if (!shared) {
-    const config = loadConfig(process.env);
+    // Sign-in limits high enough for the whole suite; rate-limits.spec.ts builds its own app with low ones.
+    const config = loadConfig({ LOGIN_RATE_LIMIT: '100000', RESET_RATE_LIMIT: '100000', ...process.env });
     const db = createDatabase(config);
     shared = { app: createApp({ config, db, logger: createLogger('silent') }), db };
   }
