@@ -9,7 +9,7 @@ import { catchError, debounceTime, map, of, startWith, switchMap } from 'rxjs';
 import { QuantityField } from '../shared/quantity-field';
 import { CalculateApi } from './calculate-api';
 import { KIND_GROUPS } from './kind-groups';
-import { buildLineForm, initialUnit, specFromForm, type LineForm, type UnitMap } from './line-form';
+import { buildLineForm, initialUnit, isFieldInUse, specFromForm, type LineForm, type SurfaceModel, type UnitMap } from './line-form';
 import { LineReadout } from './line-readout';
 import { ServerCheck, type ServerCheckState } from './server-check';
 import { CrossSectionDrawing } from '../shared/section-drawing/cross-section-drawing';
@@ -71,6 +71,12 @@ export class CalculatePage {
   protected readonly units = computed(() => this.state().units());
   protected readonly flags = computed(() => this.state().flags());
   protected readonly method = computed(() => this.state().method());
+  protected readonly surface = signal<SurfaceModel>('smooth');
+  protected readonly surfaceModels: readonly { id: SurfaceModel; label: string }[] = [
+    { id: 'smooth', label: 'Smooth' },
+    { id: 'hammerstad-bekkadal', label: 'RMS roughness (Hammerstad–Bekkadal)' },
+    { id: 'huray', label: 'Nodules (Huray)' },
+  ];
 
   private readonly values = toSignal(
     toObservable(this.form).pipe(switchMap((form) => form.valueChanges.pipe(startWith(form.getRawValue()), map(() => form.getRawValue())))),
@@ -89,7 +95,7 @@ export class CalculatePage {
 
   /** The spec as typed; with an unknown, its value is only the solver's starting point. */
   private readonly typedSpec = computed<LineSpec | undefined>(() =>
-    specFromForm(this.description(), this.values(), this.units(), this.flags(), this.method(), this.unknown()),
+    specFromForm(this.description(), this.values(), this.units(), { flags: this.flags(), method: this.method(), surface: this.surface() }, this.unknown()),
   );
 
   /** Computed in the browser from the shared library on every change. */
@@ -132,7 +138,8 @@ export class CalculatePage {
   );
 
   protected fieldsIn(group: string) {
-    return this.description().fields.filter((field) => field.group === group && field.quantity !== 'boolean');
+    const surface = this.surface();
+    return this.description().fields.filter((field) => field.group === group && field.quantity !== 'boolean' && isFieldInUse(field, surface));
   }
 
   protected toggles() {

@@ -54,19 +54,41 @@ function fromSiOrPlain(value: number, unit: TableUnit | ''): number {
   return unit === '' ? value : fromSi(value, unit);
 }
 
+/** How the conductor surface is modelled; picks which roughness inputs apply. */
+export type SurfaceModel = 'smooth' | 'hammerstad-bekkadal' | 'huray';
+
+/** Choices beside the numeric inputs: on/off fields, the method, the surface model. */
+export interface LineChoices {
+  flags: Record<string, boolean>;
+  method?: string;
+  surface: SurfaceModel;
+}
+
+const SURFACE_FIELDS: Record<string, SurfaceModel> = {
+  roughness: 'hammerstad-bekkadal',
+  noduleRadius: 'huray',
+  noduleSurfaceRatio: 'huray',
+};
+
+/** Whether a field takes part under the chosen surface model (roughness inputs only under their own model). */
+export function isFieldInUse(field: FieldDescription, surface: SurfaceModel): boolean {
+  const model = SURFACE_FIELDS[field.name];
+  return model === undefined || model === surface;
+}
+
 /** The SI spec from the form's values; `undefined` while a required field is empty or invalid. */
 export function specFromForm(
   kind: LineKindDescription,
   values: Partial<Record<string, number | null>>,
   units: UnitMap,
-  flags: Record<string, boolean>,
-  method?: string,
+  choices: LineChoices,
   unknown?: string,
 ): LineSpec | undefined {
   const spec: Record<string, unknown> = { kind: kind.kind as LineKind };
   for (const field of kind.fields) {
+    if (!isFieldInUse(field, choices.surface)) continue;
     if (field.quantity === 'boolean') {
-      if (flags[field.name]) spec[field.name] = true;
+      if (choices.flags[field.name]) spec[field.name] = true;
       continue;
     }
     if (field.name === unknown) {
@@ -83,6 +105,7 @@ export function specFromForm(
     if (limitErrors(field, si)) return undefined;
     spec[field.name] = si;
   }
-  if (method) spec['method'] = method;
+  if (choices.method) spec['method'] = choices.method;
+  if (choices.surface !== 'smooth') spec['roughnessModel'] = choices.surface;
   return spec as unknown as LineSpec;
 }

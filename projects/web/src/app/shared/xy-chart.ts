@@ -101,11 +101,13 @@ export class XyChart {
         scales: {
           x: {
             type: isBar ? 'category' : this.logX() ? 'logarithmic' : 'linear',
+            bounds: 'data',
             title: { display: !!this.xLabel(), text: this.xLabel(), color: ink },
             ticks: { color: ink, maxTicksLimit: 8 },
             grid: { color: grid },
           },
           y: {
+            grace: '5%',
             title: { display: !!this.yLabel(), text: this.yLabel(), color: ink },
             ticks: { color: ink },
             grid: { color: grid },

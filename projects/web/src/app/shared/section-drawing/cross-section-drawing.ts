@@ -4,9 +4,11 @@ import { crossSectionFromSpec, fromSi, type LineSpec, type TableUnit } from '@li
 import { trimmed } from '../engineering-format';
 import { sectionLayout, type Box, type Dimension, type Primitive } from './section-layout';
 
-const WIDTH = 640;
-const HEIGHT = 280;
-const PADDING = 36;
+const WIDTH = 480;
+/** The drawing's height follows the section's proportions within these bounds [px]. */
+const MIN_HEIGHT = 170;
+const MAX_HEIGHT = 300;
+const PADDING = 30;
 const UNIT_LABEL: Partial<Record<TableUnit, string>> = { um: 'µm' };
 
 interface DrawnPrimitive {
@@ -48,7 +50,12 @@ export class CrossSectionDrawing {
   readonly unit = input<TableUnit>('mm');
   protected readonly zoom = signal(1);
   protected readonly width = WIDTH;
-  protected readonly height = HEIGHT;
+  protected readonly height = computed(() => {
+    const view = this.layout()?.view;
+    if (!view) return MIN_HEIGHT;
+    const natural = ((WIDTH - 2 * PADDING) * (view.top - view.bottom)) / (view.right - view.left) + 2 * PADDING;
+    return Math.round(Math.min(MAX_HEIGHT, Math.max(MIN_HEIGHT, natural)));
+  });
 
   private readonly layout = computed(() => {
     const spec = this.spec();
@@ -80,10 +87,11 @@ export class CrossSectionDrawing {
   private readonly transform = computed(() => {
     const view = this.view();
     if (!view) return undefined;
-    const scale = Math.min((WIDTH - 2 * PADDING) / (view.right - view.left), (HEIGHT - 2 * PADDING) / (view.top - view.bottom));
+    const height = this.height();
+    const scale = Math.min((WIDTH - 2 * PADDING) / (view.right - view.left), (height - 2 * PADDING) / (view.top - view.bottom));
     const offsetX = (WIDTH - scale * (view.right - view.left)) / 2;
-    const offsetY = (HEIGHT - scale * (view.top - view.bottom)) / 2;
-    return (x: number, y: number): [number, number] => [offsetX + (x - view.left) * scale, HEIGHT - offsetY - (y - view.bottom) * scale];
+    const offsetY = (height - scale * (view.top - view.bottom)) / 2;
+    return (x: number, y: number): [number, number] => [offsetX + (x - view.left) * scale, height - offsetY - (y - view.bottom) * scale];
   });
 
   protected readonly primitives = computed<DrawnPrimitive[]>(() => {

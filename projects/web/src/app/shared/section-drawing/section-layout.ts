@@ -35,7 +35,7 @@ export interface SectionLayout {
 }
 
 /** How far the drawing reaches past the conductors, relative to the section's height. */
-const SIDE_MARGIN = 2.2;
+const SIDE_MARGIN = 1.4;
 /** Drawn thickness of a solid plane, relative to the view height. */
 const PLANE_DEPTH = 0.08;
 
