@@ -9,17 +9,22 @@
 /** η0 = μ0·c0 with μ0 from CODATA 2018 and c0 exact (SI 2019) [Ω]. */
 export const ETA0 = 1.25663706212e-6 * 299_792_458;
 
-/** K(k) for modulus k: π / (2·AGM(1, √(1 − k²))) (Abramowitz & Stegun 1964, eq. 17.6.1). */
-export function ellipticKByAgm(k: number): number {
-  let a = 1;
-  let b = Math.sqrt((1 - k) * (1 + k));
-  while (Math.abs(a - b) > 1e-16 * a) [a, b] = [(a + b) / 2, Math.sqrt(a * b)];
-  return Math.PI / (2 * a);
+/** Arithmetic–geometric mean; quadratic convergence, 40 rounds is a hard stop never reached. */
+function agm(a0: number, b0: number): number {
+  let a = a0;
+  let b = b0;
+  for (let round = 0; round < 40 && Math.abs(a - b) > 4e-16 * a; round++) [a, b] = [(a + b) / 2, Math.sqrt(a * b)];
+  return a;
 }
 
-/** K(k′)/K(k) with k′ = √(1 − k²). */
-function ratioPrimeOverK(k: number): number {
-  return ellipticKByAgm(Math.sqrt((1 - k) * (1 + k))) / ellipticKByAgm(k);
+/** K(k) for modulus k: π / (2·AGM(1, √(1 − k²))) (Abramowitz & Stegun 1964, eq. 17.6.1). */
+export function ellipticKByAgm(k: number): number {
+  return Math.PI / (2 * agm(1, Math.sqrt((1 - k) * (1 + k))));
+}
+
+/** K(k′)/K(k) = AGM(1, k′)/AGM(1, k), from k and k′ given separately so neither loses precision near 0 or 1. */
+function ratioPrimeOverK(k: number, kPrime = Math.sqrt((1 - k) * (1 + k))): number {
+  return agm(1, kPrime) / agm(1, k);
 }
 
 /**
@@ -27,7 +32,8 @@ function ratioPrimeOverK(k: number): number {
  * (S. B. Cohn, IRE Trans. MTT-2, July 1954, pp. 52–57; the tanh form of the sech result).
  */
 export function cohnStripline(w: number, b: number, er: number): number {
-  return (ETA0 / (4 * Math.sqrt(er))) * ratioPrimeOverK(Math.tanh((Math.PI * w) / (2 * b)));
+  const x = (Math.PI * w) / (2 * b);
+  return (ETA0 / (4 * Math.sqrt(er))) * ratioPrimeOverK(Math.tanh(x), 1 / Math.cosh(x));
 }
 
 /**
