@@ -47,7 +47,7 @@ const rows: { name: string; msPerOp: number; hasGoal: boolean }[] = [
     msPerOp: time(() => stepResponse(lattice, { duration: 2001 * delay })),
     hasGoal: true,
   },
-  { name: 'lossy line + RC load, 4,096 frequency points', msPerOp: time(() => stepResponse(lossy, { duration: 40 * delay, points: 4096 })), hasGoal: true },
+  { name: 'lossy line + R∥C load, 4,096 samples (4,097 bins)', msPerOp: time(() => stepResponse(lossy, { duration: 40 * delay, points: 4096 })), hasGoal: true },
   {
     name: 'ladder, 200 sections, 4,096 samples',
     msPerOp: time(() => ladderStepResponse(ladderCircuit, 200, { duration: 20 * delay, points: 4096 })),

@@ -52,16 +52,51 @@ export function erfc(x: number): number {
   return Math.exp(-x * x) / (Math.sqrt(Math.PI) * fraction);
 }
 
+/** Table steps per σ for the edge: cubic Hermite error ~ h⁴/384·max|Φ⁗|, below 1e−11 at h = 1/128 (see the tests). */
+const TABLE_STEPS_PER_SIGMA = 128;
+const TABLE_SIZE = 2 * EDGE_HALF_WIDTH_SIGMAS * TABLE_STEPS_PER_SIGMA + 1;
+let edgeTable: { values: Float64Array; slopes: Float64Array } | undefined;
+
+/** Φ and h·φ at x = −8 … 8 in steps h = 1/128, built on first use from erfc. */
+function table(): { values: Float64Array; slopes: Float64Array } {
+  if (!edgeTable) {
+    const values = new Float64Array(TABLE_SIZE);
+    const slopes = new Float64Array(TABLE_SIZE);
+    for (let i = 0; i < TABLE_SIZE; i++) {
+      const x = i / TABLE_STEPS_PER_SIGMA - EDGE_HALF_WIDTH_SIGMAS;
+      values[i] = 0.5 * erfc(-x / Math.SQRT2);
+      slopes[i] = Math.exp(-0.5 * x * x) / Math.sqrt(2 * Math.PI) / TABLE_STEPS_PER_SIGMA;
+    }
+    edgeTable = { values, slopes };
+  }
+  return edgeTable;
+}
+
 /**
  * The unit edge E(t) [dimensionless] for Gaussian width σ; σ = 0 is the ideal
  * step (1 from t = 0 on).
+ * Method: cubic Hermite interpolation of Φ between tabulated values, with the
+ *   exact slopes φ (the lattice evaluates millions of edges, and this is an
+ *   order of magnitude faster than erfc itself).
+ * Valid:  all t; absolute error below 1e−11.
  */
 export function edge(t: number, sigma: number): number {
   if (sigma === 0) return t >= 0 ? 1 : 0;
   const x = t / sigma;
-  if (x > EDGE_HALF_WIDTH_SIGMAS) return 1;
-  if (x < -EDGE_HALF_WIDTH_SIGMAS) return 0;
-  return 0.5 * erfc(-x / Math.SQRT2);
+  if (x >= EDGE_HALF_WIDTH_SIGMAS) return 1;
+  if (x <= -EDGE_HALF_WIDTH_SIGMAS) return 0;
+  const position = (x + EDGE_HALF_WIDTH_SIGMAS) * TABLE_STEPS_PER_SIGMA;
+  const i = Math.min(Math.floor(position), TABLE_SIZE - 2);
+  const u = position - i;
+  const u2 = u * u;
+  const u3 = u2 * u;
+  const { values, slopes } = table();
+  return (
+    (2 * u3 - 3 * u2 + 1) * values[i] +
+    (u3 - 2 * u2 + u) * slopes[i] +
+    (3 * u2 - 2 * u3) * values[i + 1] +
+    (u3 - u2) * slopes[i + 1]
+  );
 }
 
 /**

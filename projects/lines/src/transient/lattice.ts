@@ -120,28 +120,57 @@ export function arrivalsOf(lattice: Lattice): Arrival[] {
 }
 
 /**
- * Σ step_k·E(t − t_k) at sorted sample times, with E the erf edge of width
- * σ (edge.ts): steps more than 8σ in the past count fully, so each sample
- * costs only the steps whose edges overlap it.
+ * Voltage and current of one end at sorted sample times: Σ step_k·E(t − t_k)
+ * with E the erf edge of width σ (edge.ts). Steps more than 8σ in the past
+ * count fully, so each sample costs only the steps whose edges overlap it,
+ * and each edge is evaluated once for both quantities.
  */
-export function sampleSteps(times: number[], stepTimes: number[], steps: number[], sigma: number): number[] {
+export function sampleEnd(times: number[], steps: EndSteps, sigma: number): { voltage: number[]; current: number[] } {
   const halfWidth = EDGE_HALF_WIDTH_SIGMAS * sigma;
-  const out = new Array<number>(times.length);
+  const { times: stepTimes, voltageSteps, currentSteps } = steps;
+  const voltage = new Float64Array(times.length);
+  const current = new Float64Array(times.length);
   let done = 0;
-  let doneSum = 0;
+  let doneVoltage = 0;
+  let doneCurrent = 0;
   for (let i = 0; i < times.length; i++) {
     const t = times[i];
-    while (done < stepTimes.length && stepTimes[done] < t - halfWidth) doneSum += steps[done++];
-    let value = doneSum;
-    for (let k = done; k < stepTimes.length && stepTimes[k] <= t + halfWidth; k++) {
-      value += steps[k] * edge(t - stepTimes[k], sigma);
+    while (done < stepTimes.length && stepTimes[done] < t - halfWidth) {
+      doneVoltage += voltageSteps[done];
+      doneCurrent += currentSteps[done++];
     }
-    out[i] = value;
+    let v = doneVoltage;
+    let c = doneCurrent;
+    for (let k = done; k < stepTimes.length && stepTimes[k] <= t + halfWidth; k++) {
+      const weight = edge(t - stepTimes[k], sigma);
+      v += voltageSteps[k] * weight;
+      c += currentSteps[k] * weight;
+    }
+    voltage[i] = v;
+    current[i] = c;
   }
-  return out;
+  return { voltage: Array.from(voltage), current: Array.from(current) };
 }
 
-/** The same sum at one time t, for root refinement. */
-export function stepsAt(t: number, stepTimes: number[], steps: number[], sigma: number): number {
-  return sampleSteps([t], stepTimes, steps, sigma)[0];
+/** The voltage of one end at time t, for root refinement: the level before the edges around t plus their partial steps. */
+export function voltageAt(t: number, steps: EndSteps, sigma: number): number {
+  const halfWidth = EDGE_HALF_WIDTH_SIGMAS * sigma;
+  const first = firstIndexAtOrAfter(steps.times, t - halfWidth);
+  let value = first > 0 ? steps.levels[first - 1] : 0;
+  for (let k = first; k < steps.times.length && steps.times[k] <= t + halfWidth; k++) {
+    value += steps.voltageSteps[k] * edge(t - steps.times[k], sigma);
+  }
+  return value;
+}
+
+/** Binary search: the first index whose time is ≥ t. */
+function firstIndexAtOrAfter(times: number[], t: number): number {
+  let lo = 0;
+  let hi = times.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (times[mid] < t) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }

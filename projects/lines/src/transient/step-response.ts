@@ -8,7 +8,7 @@ import type { EndResponse, StepCircuit, StepOptions, StepResponse } from './circ
 import { EDGE_HALF_WIDTH_SIGMAS, riseTimeOfSigma } from './edge';
 import { finalLevels, settleTolerance } from './final-levels';
 import { distributedPropagation, frequencyDomainWaveforms, type Propagation } from './frequency-domain';
-import { arrivalsOf, bounce, nominalReflections, reflectionCoefficient, sampleSteps, stepsAt, type EndSteps } from './lattice';
+import { arrivalsOf, bounce, nominalReflections, reflectionCoefficient, sampleEnd, voltageAt, type EndSteps } from './lattice';
 import { settleTimeOfFunction, settleTimeOfSamples } from './settle';
 import {
   isResistiveLoad,
@@ -21,7 +21,7 @@ import {
 /** The time axis starts this many rise times before the edge's 50 % point, where the edge is below 1e−14. */
 export const EDGE_LEAD_RISE_TIMES = 3;
 /** Most round trips the lattice follows (each costs a few numbers per end). */
-const MAX_ROUND_TRIPS = 100_000;
+const MAX_ROUND_TRIPS = 20_000;
 /** A default duration never exceeds this many round trips. */
 const MAX_DEFAULT_ROUND_TRIPS = 5_000;
 /** Round trips shown when the waves never die out (|ΓS·ΓL| = 1). */
@@ -54,11 +54,21 @@ export function stepResponse(circuit: StepCircuit, options?: StepOptions): StepR
   if (settings.duration !== undefined) return frequencyResponse(normalized, settings, settings.duration);
   let duration = estimatedDuration(normalized, settings.band);
   let response = frequencyResponse(normalized, settings, duration);
+  if (isLossFree(normalized)) {
+    response.warnings.push('Nothing in the circuit dissipates (lossless line, zero-resistance source, no load resistance): it rings for ever.');
+    return response;
+  }
   for (let i = 0; i < MAX_DURATION_DOUBLINGS && !hasSettled(response); i++) {
     duration *= 2;
     response = frequencyResponse(normalized, settings, duration);
   }
   return response;
+}
+
+/** True when no element dissipates energy, so waiting longer never settles the response. */
+function isLossFree({ line, sourceResistance, load }: NormalizedCircuit): boolean {
+  const hasLoadResistance = load.resistance !== Infinity || (load.seriesRc !== null && load.seriesRc.resistance > 0);
+  return line.isLossless && sourceResistance === 0 && !hasLoadResistance;
 }
 
 const hasSettled = (response: StepResponse) =>
@@ -101,14 +111,10 @@ function latticeResponse(circuit: NormalizedCircuit, settings: NormalizedOptions
       (2 * (isRinging ? RINGING_ROUND_TRIPS : MAX_DEFAULT_ROUND_TRIPS) + 1) * line.delay,
     );
   const { time } = timeAxis(riseTime, duration, settings.points);
-  const sample = (steps: EndSteps, values: number[]) => sampleSteps(time, steps.times, values, sigma);
-  const end = (steps: EndSteps, level: number, settleTime: number): EndResponse => ({
-    voltage: sample(steps, steps.voltageSteps),
-    current: sample(steps, steps.currentSteps),
-    final: level,
-    finalCurrent: final.current,
-    settleTime,
-  });
+  const end = (steps: EndSteps, level: number, settleTime: number): EndResponse => {
+    const { voltage, current } = sampleEnd(time, steps, sigma);
+    return { voltage, current, final: level, finalCurrent: final.current, settleTime };
+  };
   return {
     time,
     source: end(lattice.source, final.sourceVoltage, sourceSettle.time),
@@ -131,6 +137,7 @@ function latticeResponse(circuit: NormalizedCircuit, settings: NormalizedOptions
  */
 function latticeSettleTime(steps: EndSteps, final: number, tolerance: number, sigma: number, t0: number) {
   const isOutside = (v: number) => Math.abs(v - final) > tolerance;
+  if (steps.levels.length === 0) return isOutside(0) ? { time: Infinity, stepsBefore: Infinity } : { time: 0, stepsBefore: 0 };
   let lastOutside = steps.levels.length - 1;
   while (lastOutside >= 0 && !isOutside(steps.levels[lastOutside])) lastOutside--;
   if (lastOutside === steps.levels.length - 1) return { time: Infinity, stepsBefore: Infinity };
@@ -138,7 +145,7 @@ function latticeSettleTime(steps: EndSteps, final: number, tolerance: number, si
   const next = lastOutside + 1;
   const stepTime = steps.times[next];
   if (sigma === 0) return { time: stepTime, stepsBefore: next };
-  const value = (t: number) => stepsAt(t, steps.times, steps.voltageSteps, sigma);
+  const value = (t: number) => voltageAt(t, steps, sigma);
   const endTime = stepTime + EDGE_HALF_WIDTH_SIGMAS * sigma;
   return { time: settleTimeOfFunction(value, final, tolerance, t0, endTime, sigma / 4), stepsBefore: next };
 }
