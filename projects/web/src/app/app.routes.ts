@@ -7,5 +7,15 @@ export const routes: Routes = [
     title: 'Calculate · Linewright',
     loadComponent: () => import('./calculate/calculate-page').then((m) => m.CalculatePage),
   },
+  {
+    path: 'compare',
+    title: 'Compare · Linewright',
+    loadComponent: () => import('./compare/compare-page').then((m) => m.ComparePage),
+  },
+  {
+    path: 'step-response',
+    title: 'Step response · Linewright',
+    loadComponent: () => import('./step-response/step-response-page').then((m) => m.StepResponsePage),
+  },
   { path: '**', redirectTo: 'calculate' },
 ];

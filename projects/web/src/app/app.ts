@@ -20,7 +20,11 @@ interface Destination {
 })
 export class App {
   protected readonly theme = inject(ThemeMode);
-  protected readonly destinations: Destination[] = [{ path: '/calculate', label: 'Calculate', icon: 'straighten' }];
+  protected readonly destinations: Destination[] = [
+    { path: '/calculate', label: 'Calculate', icon: 'straighten' },
+    { path: '/compare', label: 'Compare', icon: 'view_column' },
+    { path: '/step-response', label: 'Step response', icon: 'ssid_chart' },
+  ];
 
   constructor() {
     inject(MatIconRegistry).setDefaultFontSetClass('material-symbols-outlined');

@@ -29,6 +29,10 @@ export interface XySeries {
 /** Series colours of our own palette, distinct in both themes. */
 export const SERIES_COLOURS = ['#1d8a96', '#c27a35', '#8a5fb4', '#6f8f2a', '#c2475f', '#4d6fd1'];
 
+/** Axis text and grid colours per theme, matching the palette's neutral tones. */
+const CHART_INK = { light: '#3f4949', dark: '#bec8c9' };
+const CHART_GRID = { light: '#dbe4e5', dark: '#3f4949' };
+
 /**
  * A small chart.js wrapper for x–y lines and histograms. Charts live only in
  * lazy-loaded screens, so chart.js never weighs on the first page load.
@@ -57,9 +61,7 @@ export class XyChart {
   constructor() {
     inject(DestroyRef).onDestroy(() => this.chart?.destroy());
     effect(() => {
-      // Read the theme so a switch re-reads the colours from the stylesheet.
-      this.theme.isDark();
-      const config = this.configuration();
+      const config = this.configuration(this.theme.isDark());
       if (!this.chart) {
         this.chart = new Chart(this.canvas().nativeElement, config);
         return;
@@ -70,10 +72,10 @@ export class XyChart {
     });
   }
 
-  private configuration(): ChartConfiguration {
-    const style = getComputedStyle(document.documentElement);
-    const ink = style.getPropertyValue('--mat-sys-on-surface-variant').trim() || '#444';
-    const grid = style.getPropertyValue('--mat-sys-outline-variant').trim() || '#ddd';
+  /** Canvas needs resolved colours; the theme's tokens are light-dark() expressions it cannot read. */
+  private configuration(isDark: boolean): ChartConfiguration {
+    const ink = isDark ? CHART_INK.dark : CHART_INK.light;
+    const grid = isDark ? CHART_GRID.dark : CHART_GRID.light;
     const isBar = this.type() === 'bar';
     const datasets = this.series().map((series, index) => {
       const colour = SERIES_COLOURS[index % SERIES_COLOURS.length];

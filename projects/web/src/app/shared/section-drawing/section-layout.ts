@@ -156,8 +156,9 @@ function dimensionsOf(section: CrossSection, spec: LineSpec): Dimension[] {
     dimensions.push({ field: 'h2', value: value('h2'), from: [first.left, first.top], to: [first.left, section.groundPlanes.top], side: 'left' });
   }
   if (has('b') && section.groundPlanes?.top !== undefined) {
-    const x = last.right + (last.right - first.left) * 0.9;
-    dimensions.push({ field: 'b', value: value('b'), from: [x, planeBottom], to: [x, section.groundPlanes.top], side: 'right' });
+    // At the far side of the drawing, clear of the strip's own marks.
+    const x = first.left - (last.right - first.left) * 1.6 - (section.groundPlanes.top - planeBottom) * 0.3;
+    dimensions.push({ field: 'b', value: value('b'), from: [x, planeBottom], to: [x, section.groundPlanes.top], side: 'left' });
   }
   if (has('cover')) {
     const surface = has('h') ? value('h') : first.bottom;
