@@ -2,6 +2,7 @@ import { expect } from 'chai';
 import { erf } from 'mathjs';
 import { SPEED_OF_LIGHT, stepResponse, thresholdCrossing, type StepCircuit } from '../../../projects/lines/src/public-api';
 import { edgeSigma } from '../../../projects/lines/src/transient/edge';
+import { lineTransfer } from '../../../projects/lines/src/transient/line-transfer';
 import { expectClose } from '../expect-close';
 
 /** The issue's acceptance figure: frequency-domain vs exact lattice within 0.5 % of the final value. */
@@ -101,6 +102,32 @@ describe('transient frequency-domain solution', () => {
     expect(half.firstCrossing! - delay).to.be.within(0, riseTime);
     expectClose(r.load.final, 50 / 100, 1e-12);
     expect(r.warnings).to.deep.equal([]);
+  });
+
+  it('the explicit lossy line meets its own definition at the reference frequency: G/(ωC) = tanδ, ωC = ω·delay/z0, R = skinResistance (Djordjevic et al. 2001 fit; Wheeler 1942 internal reactance = R)', () => {
+    const line = lineTransfer({ z0: Z0, delay: DELAY, skinResistance: 3, tanDelta: 0.02, referenceFrequency: 1e9 }, RISE);
+    const omega = 2 * Math.PI * 1e9;
+    const { z, y } = line.impedances({ re: 0, im: omega });
+    expectClose(y.re / y.im, 0.02, 1e-12);
+    expectClose(y.im, (omega * DELAY) / Z0, 1e-12);
+    expectClose(z.re, 3, 1e-12);
+    expectClose(z.im, omega * Z0 * DELAY + 3, 1e-12);
+  });
+
+  it('a lossy line’s response is causal: nothing reaches the load before its fastest (high-frequency) wave could', () => {
+    const r = stepResponse(
+      {
+        source: { amplitude: 1, resistance: Z0, riseTime: 50e-12 },
+        line: { z0: Z0, delay: DELAY, skinResistance: 5, tanDelta: 0.02, referenceFrequency: 1e9 },
+        load: 'open',
+      },
+      { duration: 10 * DELAY },
+    );
+    // C(∞) < C(f_ref) in the wideband model, so the front travels a few per cent faster than the nominal delay.
+    const quietUntil = 0.9 * DELAY - 8 * edgeSigma(50e-12);
+    r.time.forEach((t, i) => {
+      if (t < quietUntil) expect(Math.abs(r.load.voltage[i]), `t = ${t}`).to.be.below(1e-6);
+    });
   });
 
   it('widens an edge the samples cannot resolve, and says so', () => {

@@ -12,9 +12,15 @@ import { requireNonNegative, requirePositive } from '../validation';
 import type { DirectLine, LossyLine, SpecLine, TransientLine } from './circuit';
 import { add, complex, divide, log, multiply, scale, sqrt, type Complex } from './complex';
 
-/** Lower and upper relaxation frequencies of the wideband dielectric model [Hz] (1 kHz and 1 THz: Djordjevic et al. 2001, §II, a span wide enough for any board or cable). */
-const DIELECTRIC_LOW_FREQUENCY = 1e3;
-const DIELECTRIC_HIGH_FREQUENCY = 1e12;
+/**
+ * Band edges ω1 = 10⁴ and ω2 = 10¹² rad/s of the wideband dielectric model, the
+ * same as dielectric/djordjevic-sarkar.ts uses at real frequencies; here the
+ * model is needed at complex s, which that module does not offer.
+ */
+const DIELECTRIC_LOW_OMEGA = 1e4;
+const DIELECTRIC_HIGH_OMEGA = 1e12;
+/** Where the one-point fit is trusted, as in dielectric/djordjevic-sarkar.ts [Hz]. */
+const DIELECTRIC_VALID_FREQUENCIES = { min: 1e4, max: 1e11 };
 /** Knee frequency ≈ 0.35/riseTime: the 3 dB bandwidth of a one-pole system with that 10–90 % time, ln 9/(2π). */
 const KNEE_FACTOR = Math.log(9) / (2 * Math.PI);
 
@@ -48,7 +54,7 @@ export function lineTransfer(line: TransientLine, riseTime: number): LineTransfe
  *   T. K. Sarkar, IEEE Trans. EMC 43(4), 2001, pp. 662–667:
  *   C(s) = C∞ + ΔC·ln((ω2 + s)/(ω1 + s))/ln(ω2/ω1), fitted so that at f_ref
  *   C = C_ref·(1 − j·tanδ), C_ref = delay/z0 and L = z0·delay.
- * Valid:  f_ref well inside 1 kHz … 1 THz; TEM or quasi-TEM line; ends' own
+ * Valid:  f_ref within 10 kHz … 100 GHz; TEM or quasi-TEM line; ends' own
  *   parasitics ignored.
  */
 function directLineTransfer(line: LossyLine): LineTransfer {
@@ -70,10 +76,10 @@ function directLineTransfer(line: LossyLine): LineTransfer {
     }
     requirePositive('line.referenceFrequency', line.referenceFrequency);
     referenceFrequency = line.referenceFrequency;
-    if (referenceFrequency < 10 * DIELECTRIC_LOW_FREQUENCY || referenceFrequency > DIELECTRIC_HIGH_FREQUENCY / 10) {
+    if (referenceFrequency < DIELECTRIC_VALID_FREQUENCIES.min || referenceFrequency > DIELECTRIC_VALID_FREQUENCIES.max) {
       warnings.push(
-        `line.referenceFrequency = ${referenceFrequency} Hz is outside 10 kHz–100 GHz, the range where the ` +
-          'wideband dielectric model (Djordjevic et al. 2001, 1 kHz–1 THz) is fitted; the loss is less certain.',
+        `line.referenceFrequency = ${referenceFrequency} Hz is outside 10 kHz–100 GHz, the range of the ` +
+          'wideband dielectric model (Djordjevic et al. 2001); the loss is less certain.',
       );
     }
   }
@@ -97,8 +103,8 @@ function directLineTransfer(line: LossyLine): LineTransfer {
 
 /** C(s) of the wideband Debye model (Djordjevic et al. 2001), matched to C_ref(1 − j tanδ) at ω_ref. */
 function wideBandCapacitance(referenceCapacitance: number, tanDelta: number, omegaRef: number): (s: Complex) => Complex {
-  const w1 = 2 * Math.PI * DIELECTRIC_LOW_FREQUENCY;
-  const w2 = 2 * Math.PI * DIELECTRIC_HIGH_FREQUENCY;
+  const w1 = DIELECTRIC_LOW_OMEGA;
+  const w2 = DIELECTRIC_HIGH_OMEGA;
   const span = Math.log(w2 / w1);
   const shape = (s: Complex): Complex => scale(log(divide(add(s, complex(w2)), add(s, complex(w1)))), 1 / span);
   const atReference = shape(complex(0, omegaRef));
