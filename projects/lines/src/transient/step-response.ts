@@ -55,7 +55,9 @@ export function stepResponse(circuit: StepCircuit, options?: StepOptions): StepR
   let duration = estimatedDuration(normalized, settings.band);
   let response = frequencyResponse(normalized, settings, duration);
   if (isLossFree(normalized)) {
-    response.warnings.push('Nothing in the circuit dissipates (lossless line, zero-resistance source, no load resistance): it rings for ever.');
+    response.warnings.push(
+      'Nothing in the circuit dissipates (lossless line, zero-resistance source, no load resistance): it rings for ever.',
+    );
     return response;
   }
   for (let i = 0; i < MAX_DURATION_DOUBLINGS && !hasSettled(response); i++) {
@@ -92,11 +94,6 @@ function latticeResponse(circuit: NormalizedCircuit, settings: NormalizedOptions
     ? (settings.duration ?? (2 * RINGING_ROUND_TRIPS + 1) * line.delay) + halfWidth
     : Infinity;
   const lattice = bounce(amplitude, sourceResistance, line.z0, line.delay, load.resistance, followUntil, MAX_ROUND_TRIPS);
-  const warnings = [...line.warnings];
-  if (!lattice.isComplete) {
-    warnings.push(`Only the first ${MAX_ROUND_TRIPS} round trips were followed; later steps are missing.`);
-  }
-  if (isRinging) warnings.push('|ΓS·ΓL| = 1: the reflections never die out, so the line never settles.');
   const final = finalLevels(circuit);
   const t0 = -EDGE_LEAD_RISE_TIMES * riseTime;
   const settle = (steps: EndSteps, level: number) =>
@@ -110,6 +107,12 @@ function latticeResponse(circuit: NormalizedCircuit, settings: NormalizedOptions
       Number.isFinite(settledBy) ? 1.2 * settledBy + 2 * line.delay + riseTime : Infinity,
       (2 * (isRinging ? RINGING_ROUND_TRIPS : MAX_DEFAULT_ROUND_TRIPS) + 1) * line.delay,
     );
+  const warnings = [...line.warnings];
+  const lastFollowed = Math.max(lattice.source.times.at(-1) ?? 0, lattice.load.times.at(-1) ?? 0);
+  if (!lattice.isComplete && (lastFollowed < duration || !Number.isFinite(settledBy))) {
+    warnings.push(`Only the first ${MAX_ROUND_TRIPS} round trips were followed; later steps are missing.`);
+  }
+  if (isRinging) warnings.push('|ΓS·ΓL| = 1: the reflections never die out, so the line never settles.');
   const { time } = timeAxis(riseTime, duration, settings.points);
   const end = (steps: EndSteps, level: number, settleTime: number): EndResponse => {
     const { voltage, current } = sampleEnd(time, steps, sigma);

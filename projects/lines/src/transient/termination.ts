@@ -85,7 +85,7 @@ export function adviseTermination(circuit: StepCircuit, options: TerminationOpti
     lowLevel: 0,
     response,
   });
-  const power = (high: number, low = 0) => ({ powerHigh: high, powerLow: low, averagePower: (high + low) / 2 });
+  const power = (high: number) => ({ powerHigh: high, powerLow: 0, averagePower: high / 2 });
 
   const none: TerminationAdvice = { scheme: 'none', isApplicable: true, components: {}, ...summary(solve(circuit)), ...power(0) };
 
@@ -93,7 +93,13 @@ export function adviseTermination(circuit: StepCircuit, options: TerminationOpti
   if (rs < z0) {
     const seriesResistance = z0 - rs;
     const response = solve({ ...circuit, source: { ...circuit.source, resistance: z0 } });
-    series = { scheme: 'series', isApplicable: true, components: { seriesResistance }, ...summary(response), ...power(response.load.finalCurrent ** 2 * seriesResistance) };
+    series = {
+      scheme: 'series',
+      isApplicable: true,
+      components: { seriesResistance },
+      ...summary(response),
+      ...power(response.load.finalCurrent ** 2 * seriesResistance),
+    };
   } else {
     series = notApplicable('series', `the driver's ${rs} Ω already equals or exceeds Z0 = ${z0.toPrecision(4)} Ω`);
   }
@@ -112,7 +118,13 @@ export function adviseTermination(circuit: StepCircuit, options: TerminationOpti
 
   const capacitance = (RC_ROUND_TRIPS * 2 * delay) / z0;
   const rcResponse = solve({ ...circuit, load: { ...base, seriesRc: { resistance: z0, capacitance } } });
-  const rc: TerminationAdvice = { scheme: 'rc', isApplicable: true, components: { resistance: z0, capacitance }, ...summary(rcResponse), ...power(0) };
+  const rc: TerminationAdvice = {
+    scheme: 'rc',
+    isApplicable: true,
+    components: { resistance: z0, capacitance },
+    ...summary(rcResponse),
+    ...power(0),
+  };
 
   return [none, series, parallelAdvice, thevenin, rc];
 }
