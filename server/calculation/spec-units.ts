@@ -10,12 +10,32 @@ export function siValue(value: number | string, quantity: FieldQuantity, field: 
   return typeof value === 'number' ? value : parseQuantity(value, quantity, field);
 }
 
+/**
+ * Upper bounds on magnitudes the API accepts, by quantity: far beyond any
+ * board or cable, yet small enough that every model stays finite (a 1e15 m
+ * strip makes the closed forms overflow). Common practice, no source.
+ */
+const CEILINGS: Partial<Record<FieldQuantity, number>> = {
+  length: 1e4,
+  frequency: 1e13,
+  conductivity: 1e9,
+  relativePermittivity: 1e4,
+  lossTangent: 10,
+  electricField: 1e10,
+  perLength: 1e5,
+};
+
 export function specToSi(input: Record<string, unknown>, path = 'spec'): LineSpec {
   const fields = new Map(kindFields(input['kind'] as LineSpec['kind']).map((field) => [field.name, field]));
   const spec: Record<string, unknown> = {};
   for (const [name, value] of Object.entries(input)) {
     const field = fields.get(name);
-    spec[name] = typeof value === 'string' && field && field.quantity !== 'boolean' ? parseQuantity(value, field.quantity, `${path}.${name}`) : value;
+    const converted = typeof value === 'string' && field && field.quantity !== 'boolean' ? parseQuantity(value, field.quantity, `${path}.${name}`) : value;
+    const ceiling = field && CEILINGS[field.quantity];
+    if (ceiling !== undefined && typeof converted === 'number' && Math.abs(converted) > ceiling) {
+      throw new LineInputError(`${path}.${name}`, `must be at most ${ceiling} in SI units`);
+    }
+    spec[name] = converted;
   }
   return spec as unknown as LineSpec;
 }
