@@ -99,7 +99,9 @@ export interface EndResponse {
   finalCurrent: number;
   /**
    * Time after which the voltage stays within band·|final| of the final value
-   * (band·|amplitude| when the final value is 0) [s]; Infinity if it never does.
+   * (band·|amplitude| when the final value is 0) [s]: 0 if it never leaves the
+   * band, Infinity if it has not settled (lattice: never; frequency domain:
+   * not within the computed window, with a warning).
    */
   settleTime: number;
 }
@@ -125,7 +127,8 @@ export interface StepResponse {
   reflection: { source: number; load: number | null };
   /**
    * Round trips (2·delay) after the first arrival at the load until the load
-   * settles: 0 for a clean single step. Lattice only; null otherwise.
+   * settles: 0 for a clean single step, Infinity if it never settles. Lattice
+   * only; null otherwise.
    */
   roundTripsToSettle: number | null;
   warnings: string[];
