@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal, untracked, type WritableSignal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, signal, untracked, type WritableSignal } from '@angular/core';
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -7,6 +7,7 @@ import { MatSlideToggleModule } from '@angular/material/slide-toggle';
 import { ESTIMATE_NOTE, calculate, lineKind, solve, type LineKind, type LineResult, type LineSpec } from '@linewright/lines';
 import { catchError, debounceTime, map, of, startWith, switchMap } from 'rxjs';
 import { QuantityField } from '../shared/quantity-field';
+import { CurrentLine } from '../shared/current-line';
 import { CalculateApi } from './calculate-api';
 import { KIND_GROUPS } from './kind-groups';
 import { buildLineForm, initialUnit, isFieldInUse, specFromForm, type LineForm, type SurfaceModel, type UnitMap } from './line-form';
@@ -54,6 +55,7 @@ const SERVER_CHECK_DELAY_MS = 400;
 })
 export class CalculatePage {
   private readonly api = inject(CalculateApi);
+  private readonly currentLine = inject(CurrentLine);
   protected readonly kindGroups = KIND_GROUPS;
   protected readonly fieldGroups = FIELD_GROUPS;
   protected readonly estimateNote = ESTIMATE_NOTE;
@@ -136,6 +138,14 @@ export class CalculatePage {
     ),
     { initialValue: { status: 'idle' } as ServerCheckState },
   );
+
+  constructor() {
+    // Compare and step response can start from the line on this screen.
+    effect(() => {
+      const spec = this.spec();
+      if (spec) this.currentLine.spec.set(spec);
+    });
+  }
 
   protected fieldsIn(group: string) {
     const surface = this.surface();
