@@ -2,11 +2,15 @@ import { crossSectionFromSpec, fieldSolve, fieldSolveLine } from '../../../proje
 import { expectClose } from '../expect-close';
 import { coaxExact, cohnCoupledStripline, cohnStripline, twinLeadExact, wireOverGroundExact } from './exact-references';
 
+/** Field solves take up to a few seconds each; mocha's 2 s default is for unit tests. */
+const SOLVE_TIMEOUT = 30_000;
+
 /** The accuracy the issue asks of the solver against exact TEM results. */
 const EXACT_TOLERANCE = 0.005;
 const mm = 1e-3;
 
-describe('field solver against exact TEM results', () => {
+describe('field solver against exact TEM results', function () {
+  this.timeout(SOLVE_TIMEOUT);
   for (const w of [0.1, 0.4, 1, 2.5]) {
     it(`zero-thickness stripline, w/b = ${w}, is within 0.5 % of Cohn's elliptic-integral result (IRE Trans. MTT-2, 1954)`, async () => {
       const b = 0.5 * mm;

@@ -1,23 +1,28 @@
 /**
- * The coarsest grid of the refinement sequence. Cell sizes are set from the
- * section itself: fine at conductor corners (a third of the smallest gap
- * between required lines in the features, but not below 1/300 of the section),
- * at most 1/12 of the section inside the features, growing by 1.5 per cell
- * away from both. A section whose required lines are mirror-symmetric gets
- * mirror-symmetric grid lines, so that symmetry can be detected exactly.
+ * The coarsest grid of the refinement sequence, its cell sizes set from the
+ * section itself: fine at conductor corners (a tenth of the smallest gap
+ * between required lines in the features, but not below 1/1000 of the
+ * section), a quarter of the radius across round wires (smooth boundaries need
+ * no grading), at most 1/12 of the section inside the features, and growing by
+ * 1.4 per cell away from all of them. The shares were tuned on the cases of
+ * test/lines/field for the fewest cells at the default tolerance (common
+ * practice, no source). A section whose required lines are mirror-symmetric
+ * gets mirror-symmetric grid lines, so that symmetry can be detected exactly.
  */
 import type { DirectionLines, SolverDomain } from './domain';
 import { baseLines, type GradingRule, uniqueSorted } from './grid-lines';
 
-/** Fine cell size as a share of the smallest feature gap (common practice, no source; tuned in the self-convergence test). */
-const CORNER_SHARE = 1 / 3;
+/** Fine cell size as a share of the smallest feature gap. */
+const CORNER_SHARE = 1 / 10;
 /** Bounds on the fine cell size, as shares of the section size. */
-const FINEST_SHARE = 1 / 300;
+const FINEST_SHARE = 1 / 1000;
 const COARSEST_FINE_SHARE = 1 / 20;
+/** Cell size across a round wire, as a share of its radius. */
+const WIRE_SHARE = 1 / 4;
 /** Largest cell inside the features, as a share of the section size. */
 const FEATURE_SHARE = 1 / 12;
 /** Ratio of neighbouring cell sizes. */
-const GROWTH = 1.5;
+const GROWTH = 1.4;
 
 export interface BaseGrid {
   xs: number[];
@@ -28,19 +33,31 @@ export interface BaseGrid {
 export function baseGrid(domain: SolverDomain): BaseGrid {
   const { box, feature, size, tolerance } = domain;
   const fine = Math.min(COARSEST_FINE_SHARE * size, Math.max(FINEST_SHARE * size, CORNER_SHARE * smallestGap(domain)));
-  const rule = (start: number, end: number): GradingRule => ({ fine, coarse: FEATURE_SHARE * size, growth: GROWTH, featureStart: start, featureEnd: end });
-  const ys = baseLines(box.bottom, box.top, [...domain.y.aligned, ...domain.y.refine], domain.y.refine, rule(feature.bottom, feature.top), tolerance);
-  return { xs: symmetricLines(domain, rule(feature.left, feature.right)), ys };
+  const rule = (lines: DirectionLines, start: number, end: number): GradingRule => ({
+    growth: GROWTH,
+    zones: [
+      { start, end, size: FEATURE_SHARE * size },
+      ...lines.corners.map((corner) => ({ start: corner, end: corner, size: fine })),
+      ...lines.wires.map((wire) => ({ ...wire, size: (WIRE_SHARE * (wire.end - wire.start)) / 2 })),
+    ],
+  });
+  const ys = baseLines(box.bottom, box.top, required(domain.y), rule(domain.y, feature.bottom, feature.top), tolerance);
+  return { xs: symmetricLines(domain, rule(domain.x, feature.left, feature.right)), ys };
 }
 
-/** x lines: built on the right half and mirrored when the required lines allow it, so mirror images match to the last bit. */
+function required(lines: DirectionLines): number[] {
+  return [...lines.aligned, ...lines.corners];
+}
+
+/** x lines: built on the right half and mirrored when everything that shapes them allows it, so mirror images match to the last bit. */
 function symmetricLines(domain: SolverDomain, rule: GradingRule): number[] {
   const { box, axis, tolerance } = domain;
-  const required = [...domain.x.aligned, ...domain.x.refine];
-  if (!isMirrorSymmetric(required, axis, tolerance) || !isMirrorSymmetric(domain.x.refine, axis, tolerance)) {
-    return baseLines(box.left, box.right, required, domain.x.refine, rule, tolerance);
+  const lines = required(domain.x);
+  const wireEnds = domain.x.wires.flatMap((wire) => [wire.start, wire.end]);
+  if (![lines, domain.x.corners, wireEnds].every((set) => isMirrorSymmetric(set, axis, tolerance))) {
+    return baseLines(box.left, box.right, lines, rule, tolerance);
   }
-  const right = baseLines(axis, box.right, required, domain.x.refine, rule, tolerance);
+  const right = baseLines(axis, box.right, lines, rule, tolerance);
   const left = right
     .slice(1)
     .map((x) => 2 * axis - x)
@@ -62,7 +79,7 @@ function smallestGap(domain: SolverDomain): number {
   const { feature, tolerance } = domain;
   const gap = (lines: DirectionLines, start: number, end: number): number => {
     const inside = uniqueSorted(
-      [...lines.refine, ...lines.aligned].filter((value) => value >= start - tolerance && value <= end + tolerance),
+      required(lines).filter((value) => value >= start - tolerance && value <= end + tolerance),
       tolerance,
     );
     let smallest = Infinity;

@@ -5,16 +5,18 @@
  * Open sections are closed by a grounded box. The field of a line over a plane
  * (or of a balanced pair) is a dipole field far away, whose potential falls as
  * 1/r, so the energy left outside a box of size R falls as (S/R)² for a section
- * of size S: at R = 30·S the truncation changes Z0 by about 0.05 % (measured in
- * test/lines/field/open-boundary.spec.ts), while the graded grid reaches that
- * far with only ~15 extra lines per side. Between two planes the field decays as
- * exp(−π·x/gap), so there the side walls need only be 4 gaps away.
+ * of size S. The graded grid reaches far for little: going from 30·S to 60·S
+ * adds ~10 % cells. Measured on microstrip (test/lines/field/open-boundary.spec.ts):
+ * walls at 30·S lower Z0 by ≈ 0.03–0.04 %, at 60·S by ≈ 0.01 %, well inside the
+ * default tolerance (the estimated error does not include this). Between two
+ * planes the field decays as exp(−π·x/gap), so there the side walls need only
+ * be 4 gaps away.
  */
 import type { CrossSection, Shape } from './cross-section';
 import { shapeBounds, shapeContains, shapeLines } from './shapes';
 
 /** Distance from the features to an open section's box walls, in section sizes. */
-export const OPEN_BOUNDARY_DISTANCE = 30;
+export const OPEN_BOUNDARY_DISTANCE = 60;
 /** Distance from the features to the side walls between two planes, in plane gaps (exp(−4π) ≈ 3.5e-6). */
 const PLATE_SIDE_DISTANCE = 4;
 /** Geometric tolerance relative to the section size: points this close to a boundary count as on it. */
@@ -27,9 +29,21 @@ export interface Box {
   top: number;
 }
 
-/** Grid lines one direction needs: `refine` lines are conductor corners the grid grades towards; `aligned` lines (material interfaces, walls) only have to be present. */
+/** A closed range of one coordinate. */
+export interface Span {
+  start: number;
+  end: number;
+}
+
+/**
+ * What one direction of the grid needs: `corners` are conductor vertices, where
+ * the field is singular and the grid grades down towards them; `wires` are the
+ * extents of round conductors, fine all across; `aligned` lines (material
+ * interfaces, walls, wire extremes) only have to be present.
+ */
 export interface DirectionLines {
-  refine: number[];
+  corners: number[];
+  wires: Span[];
   aligned: number[];
 }
 
@@ -56,9 +70,15 @@ export function solverDomain(section: CrossSection): SolverDomain {
   const size = Math.max(feature.right - feature.left, feature.top - feature.bottom);
   const tolerance = RELATIVE_TOLERANCE * size;
   const box = enclosingBox(section, feature, size);
-  const x: DirectionLines = { refine: [], aligned: [box.left, box.right] };
-  const y: DirectionLines = { refine: [], aligned: [box.bottom, box.top] };
-  for (const conductor of section.conductors) addLines(conductor.shape, x.refine, y.refine);
+  const x: DirectionLines = { corners: [], wires: [], aligned: [box.left, box.right] };
+  const y: DirectionLines = { corners: [], wires: [], aligned: [box.bottom, box.top] };
+  for (const { shape } of section.conductors) {
+    if (shape.shape === 'circle') {
+      x.wires.push({ start: shape.centerX - shape.radius, end: shape.centerX + shape.radius });
+      y.wires.push({ start: shape.centerY - shape.radius, end: shape.centerY + shape.radius });
+      addLines(shape, x.aligned, y.aligned);
+    } else addLines(shape, x.corners, y.corners);
+  }
   for (const region of section.dielectrics) addLines(region.shape, x.aligned, y.aligned);
   if (section.enclosure) addLines(section.enclosure, x.aligned, y.aligned);
 

@@ -21,7 +21,7 @@ import { type GridSolution, solveGrid } from './grid-solution';
 import { type LineParameters, lineParameters } from './line-parameters';
 import { potentialMap, type PotentialMap } from './potential-map';
 import { extrapolate } from './richardson';
-import { planSolves, type SolvePlan } from './symmetry';
+import { fullDomainPlan, planSolves, type SolvePlan } from './symmetry';
 import { validateCrossSection } from './validate-section';
 
 /** Default relative change of Z0 accepted as converged (0.5 %). */
@@ -57,6 +57,8 @@ export interface FieldSolveOptions {
   isCancelled?: () => boolean;
   /** An AbortSignal or anything with `aborted`, polled like isCancelled. */
   signal?: { readonly aborted: boolean };
+  /** Use an exact mirror symmetry when the section has one (default true); false solves the whole domain. */
+  useSymmetry?: boolean;
 }
 
 /** One grid of the refinement sequence, for reports. */
@@ -99,7 +101,7 @@ export async function fieldSolve(section: CrossSection, options: FieldSolveOptio
 
   const domain = solverDomain(section);
   const base = baseGrid(domain);
-  const plan = planSolves(section, domain, base.xs, base.ys);
+  const plan = options.useSymmetry === false ? fullDomainPlan(domain.bodyCount - 1) : planSolves(section, domain, base.xs, base.ys);
   const baseXs = plan.isHalf ? base.xs.filter((x) => x >= domain.axis - domain.tolerance) : base.xs;
   const baseCells = (baseXs.length - 1) * (base.ys.length - 1);
   const history: { parts: number; solution: GridSolution; millis: number }[] = [];

@@ -8,17 +8,18 @@
  * is what Richardson extrapolation assumes.
  */
 
-/** How a direction's lines are spaced. */
+/** A range (a single point when start = end) in which cells are at most `size`; away from it the allowed size grows with the distance. */
+export interface GradingZone {
+  start: number;
+  end: number;
+  size: number;
+}
+
+/** How a direction's lines are spaced: the cell size at x is min over zones of size + (growth − 1)·distance(x, zone). */
 export interface GradingRule {
-  /** Cell size at a refine line [m]. */
-  fine: number;
-  /** Largest cell inside the feature range [m]. */
-  coarse: number;
+  zones: GradingZone[];
   /** Ratio between neighbouring cell sizes, > 1. */
   growth: number;
-  /** Range of the features; outside it cells keep growing. */
-  featureStart: number;
-  featureEnd: number;
 }
 
 /** Integration sub-steps per cell when spreading the cell density over an interval. */
@@ -28,14 +29,16 @@ const SUBSTEPS_PER_CELL = 8;
  * Base lines between `start` and `end` (both included): every line of `required`
  * in the range, with cells whose size follows `rule` in between.
  */
-export function baseLines(start: number, end: number, required: number[], refine: number[], rule: GradingRule, tolerance: number): number[] {
+export function baseLines(start: number, end: number, required: number[], rule: GradingRule, tolerance: number): number[] {
   const inside = required.filter((value) => value > start + tolerance && value < end - tolerance);
   const keys = uniqueSorted([start, end, ...inside], tolerance);
   const cellSize = (position: number): number => {
-    let nearest = Infinity;
-    for (const line of refine) nearest = Math.min(nearest, Math.abs(position - line));
-    const outside = Math.max(0, rule.featureStart - position, position - rule.featureEnd);
-    return Math.min(rule.fine + (rule.growth - 1) * nearest, rule.coarse + (rule.growth - 1) * outside);
+    let size = Infinity;
+    for (const zone of rule.zones) {
+      const distance = Math.max(0, zone.start - position, position - zone.end);
+      size = Math.min(size, zone.size + (rule.growth - 1) * distance);
+    }
+    return size;
   };
   const lines = [keys[0]!];
   for (let index = 1; index < keys.length; index++) lines.push(...intervalLines(keys[index - 1]!, keys[index]!, cellSize));

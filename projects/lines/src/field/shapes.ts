@@ -11,9 +11,6 @@ export interface ShapeLines {
   y: number[];
 }
 
-/** Circles get extra lines at these angles so that the grid is fine all round the wire, not only at its extremes. */
-const CIRCLE_LINE_ANGLES = [0, Math.PI / 6, Math.PI / 3, Math.PI / 2, (2 * Math.PI) / 3, (5 * Math.PI) / 6, Math.PI];
-
 /** True when (x, y) lies inside `shape` or within `tolerance` of its boundary. */
 export function shapeContains(shape: Shape, x: number, y: number, tolerance: number): boolean {
   switch (shape.shape) {
@@ -42,7 +39,7 @@ export function permittivityAt(section: CrossSection, x: number, y: number): num
   return value;
 }
 
-/** The grid lines a shape needs: its vertices, or points round a circle. */
+/** The grid lines a shape needs: its vertices, or a circle's centre and extremes (its curved boundary is handled by cut links). */
 export function shapeLines(shape: Shape): ShapeLines {
   switch (shape.shape) {
     case 'rectangle':
@@ -70,14 +67,8 @@ export function shapeBounds(shape: Shape): [number, number, number, number] {
   }
 }
 
-function circleLines(circle: CircleShape): ShapeLines {
-  const x: number[] = [];
-  const y: number[] = [];
-  for (const angle of CIRCLE_LINE_ANGLES) {
-    x.push(circle.centerX + circle.radius * Math.cos(angle));
-    y.push(circle.centerY + circle.radius * Math.cos(angle));
-  }
-  return { x, y };
+function circleLines({ centerX: x, centerY: y, radius: r }: CircleShape): ShapeLines {
+  return { x: [x - r, x, x + r], y: [y - r, y, y + r] };
 }
 
 function finite(values: number[]): number[] {

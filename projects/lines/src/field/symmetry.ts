@@ -65,6 +65,11 @@ export function planSolves(section: CrossSection, domain: SolverDomain, xs: Arra
       },
     };
   }
+  return fullDomainPlan(signals);
+}
+
+/** The plan without symmetry: one solve per signal conductor on the whole domain. */
+export function fullDomainPlan(signals: number): SolvePlan {
   return {
     symmetry: 'none',
     isHalf: false,
