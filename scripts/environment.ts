@@ -33,5 +33,8 @@ export function bootstrapSettings(purpose: Purpose): BootstrapSettings {
   }
   env['MAIL_CATCHER_DIR'] ||= join(PROJECT_ROOT, '.data', isStart ? 'mail' : `mail-${purpose}`);
   if (!isStart) env['LOG_LEVEL'] = process.env['LOG_LEVEL'] || 'silent';
-  return { dataRoot: join(PROJECT_ROOT, '.data', isStart ? 'mariadb' : `mariadb-${purpose}`), env };
+  // One data directory per instance: a second instance on another port must never share a socket or data files.
+  const isDefaultPort = env['DB_PORT'] === defaults['DB_PORT'];
+  const folder = `${isStart ? 'mariadb' : `mariadb-${purpose}`}${isDefaultPort ? '' : `-${env['DB_PORT']}`}`;
+  return { dataRoot: join(PROJECT_ROOT, '.data', folder), env };
 }
