@@ -12,6 +12,7 @@ const SOLVE_TIMEOUT = 30_000;
  */
 const HJ_Z0_ACCURACY = 0.0013;
 const HJ_ER_EFF_ACCURACY = 0.002;
+const KJ_ACCURACY = 0.01;
 /** Solved tighter than the default so the comparison tests the formula, not the grid. */
 const SOLVER_TOLERANCE = 0.002;
 
@@ -26,6 +27,21 @@ describe('field solver against the closed-form microstrip model (Hammerstad–Je
       const formula = calculate(spec);
       expectClose(field.z0, formula.z0, HJ_Z0_ACCURACY + field.estimatedError, 'z0');
       expectClose(field.erEff, formula.erEff, HJ_ER_EFF_ACCURACY + 2 * field.estimatedError, 'erEff');
+    });
+  }
+
+  for (const [u, g] of [
+    [0.75, 1],
+    [1, 0.5],
+    [0.5, 3],
+  ] as const) {
+    it(`zero-thickness coupled microstrip, w/h = ${u}, s/h = ${g}, agrees with Kirschning–Jansen 1984 within their 1 % claim plus the solver's error`, async () => {
+      // KJ_ACCURACY: "better than 1 % for 0.1 ≤ u ≤ 10, 0.1 ≤ g ≤ 10, εr ≤ 18" — recalled from memory, not checked against the paper.
+      const spec = { kind: 'coupled-microstrip', w: u * h, s: g * h, h, t: 0, er: 4.3 } as const;
+      const field = await fieldSolveLine(spec);
+      const formula = calculate(spec);
+      expectClose(field.zOdd!, formula.zOdd!, KJ_ACCURACY + field.estimatedError, 'zOdd');
+      expectClose(field.zEven!, formula.zEven!, KJ_ACCURACY + field.estimatedError, 'zEven');
     });
   }
 

@@ -32,6 +32,8 @@ export const DEFAULT_MAX_MILLIS = 10_000;
 export const DEFAULT_MAX_CELLS = 1_000_000;
 /** Base cells are cut into this many parts per side on successive grids (ratio ≈ 1.4, so a cap wastes little). */
 const REFINEMENTS = [1, 2, 3, 4, 6, 8, 11, 16, 22, 32, 45, 64];
+/** Grids always solved, whatever the caps, so that every result has a finite error estimate (the first two are tiny). */
+const MIN_LEVELS = 2;
 /** Solve time grows about as cells^1.25 with MIC(0)-CG (common practice, no source; measured in bench/field.bench.ts). */
 const TIME_GROWTH = 1.25;
 
@@ -110,7 +112,7 @@ export async function fieldSolve(section: CrossSection, options: FieldSolveOptio
 
   for (const parts of REFINEMENTS) {
     const cells = baseCells * parts * parts;
-    const last = history[history.length - 1];
+    const last = history.length >= MIN_LEVELS ? history[history.length - 1] : undefined;
     const elapsed = Date.now() - started;
     if (last && cells > maxCells) {
       warnings.push(`stopped at ${last.solution.cells} cells (cap ${maxCells}) before reaching the ${percent(tolerance)} tolerance`);
@@ -121,13 +123,16 @@ export async function fieldSolve(section: CrossSection, options: FieldSolveOptio
       break;
     }
     const levelStart = Date.now();
-    const solution = solveGrid(section, domain, plan, subdivide(baseXs, parts), subdivide(base.ys, parts), last?.solution, isCancelled);
+    const solution = solveGrid(section, domain, plan, subdivide(baseXs, parts), subdivide(base.ys, parts), history[history.length - 1]?.solution, isCancelled);
     if (!solution) throw new FieldSolveCancelledError();
     history.push({ parts, solution, millis: Date.now() - levelStart });
     estimate = estimateLimit(history);
     const info = { level: history.length - 1, cells: solution.cells, z0: estimate.parameters.z0, estimatedError: estimate.error, elapsedMillis: Date.now() - started };
     options.onProgress?.(Math.min(1, Math.max(info.elapsedMillis / maxMillis, history.length >= 3 ? tolerance / estimate.error : 0)), info);
     if (history.length >= 3 && estimate.error <= tolerance) break;
+  }
+  if (warnings.length === 0 && estimate!.error > tolerance) {
+    warnings.push(`the finest grid (${history[history.length - 1]!.solution.cells} cells) did not reach the ${percent(tolerance)} tolerance`);
   }
   const finest = history[history.length - 1]!;
   const picked = plan.symmetry === 'pair' ? 1 : 0;
