@@ -2,9 +2,9 @@
 export type { CircleShape, CrossSection, DielectricRegion, GroundPlanes, RectangleShape, SectionConductor, Shape, TrapezoidShape } from './cross-section';
 export { crossSectionFromSpec, type CrossSectionOptions } from './cross-section-from-spec';
 export {
-  DEFAULT_MAX_CELLS,
-  DEFAULT_MAX_MILLIS,
-  DEFAULT_TOLERANCE,
+  FIELD_DEFAULT_MAX_CELLS,
+  FIELD_DEFAULT_MAX_MILLIS,
+  FIELD_DEFAULT_TOLERANCE,
   FieldSolveCancelledError,
   fieldSolve,
   type FieldSolveLevel,
