@@ -62,10 +62,15 @@ describe('fieldSolve options: progress, cancellation, caps and input checks', fu
     const noSignal: CrossSection = { ...section, conductors: [{ role: 'ground', shape: { shape: 'circle', centerX: 0, centerY: 1e-3, radius: 1e-4 } }] };
     const badRadius: CrossSection = { ...section, conductors: [{ role: 'signal', shape: { shape: 'circle', centerX: 0, centerY: 1e-3, radius: -1 } }] };
     const badPermittivity: CrossSection = { ...section, dielectrics: [{ relativePermittivity: 0.5, shape: section.dielectrics[0]!.shape }] };
+    const buried: CrossSection = {
+      ...section,
+      conductors: [...section.conductors, { role: 'signal', shape: { shape: 'rectangle', left: -1e-4, right: 1e-4, bottom: -2e-4, top: -1e-4 } }],
+    };
     const upsideDown: CrossSection = { ...section, groundPlanes: { bottom: 1e-3, top: 0 } };
     expect(await rejection(fieldSolve(noSignal))).to.be.instanceOf(LineInputError).with.property('field', 'conductors');
     expect(await rejection(fieldSolve(badRadius))).to.be.instanceOf(LineInputError).with.property('field', 'conductors[0].shape.radius');
     expect(await rejection(fieldSolve(badPermittivity))).to.be.instanceOf(LineInputError).with.property('field', 'dielectrics[0].relativePermittivity');
+    expect(await rejection(fieldSolve(buried))).to.be.instanceOf(LineInputError).with.property('field', 'conductors[1]');
     expect(await rejection(fieldSolve(upsideDown))).to.be.instanceOf(LineInputError).with.property('field', 'groundPlanes.top');
   });
 });

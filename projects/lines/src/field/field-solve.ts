@@ -13,6 +13,7 @@
  * Valid: TEM (quasi-static) lines uniform along their length; perfect
  * conductors; isotropic lossless dielectrics.
  */
+import { LineInputError } from '../errors';
 import type { CrossSection } from './cross-section';
 import { baseGrid } from './base-grid';
 import { solverDomain } from './domain';
@@ -135,6 +136,7 @@ export async function fieldSolve(section: CrossSection, options: FieldSolveOptio
     const levelStart = Date.now();
     const solution = solveGrid(section, domain, plan, subdivide(baseXs, parts), subdivide(base.ys, parts), history[history.length - 1]?.solution, isCancelled);
     if (!solution) throw new FieldSolveCancelledError();
+    if (history.length === 0) requireSeparateConductors(section, solution);
     // Only the newest potentials are needed (warm start, picture); older grids keep their matrices for Richardson.
     const previous = history[history.length - 1];
     if (previous) previous.solution.potentials = { dielectric: [], vacuum: [] };
@@ -166,6 +168,14 @@ export async function fieldSolve(section: CrossSection, options: FieldSolveOptio
     warnings,
     potential: potentialMap(finest.solution.potentials.dielectric[picked]!, domain.feature, domain.box, domain.axis, mirror, excitation),
   };
+}
+
+/** A signal conductor buried in another one holds no charge; say which instead of returning an infinite Z0. */
+function requireSeparateConductors(section: CrossSection, solution: GridSolution): void {
+  const signals = section.conductors.map((conductor, index) => ({ conductor, index })).filter(({ conductor }) => conductor.role === 'signal');
+  solution.capacitance.forEach((row, i) => {
+    if (!(row[i]! > 0 && Number.isFinite(row[i]!))) throw new LineInputError(`conductors[${signals[i]!.index}]`, 'lies inside another conductor');
+  });
 }
 
 interface Estimate {
