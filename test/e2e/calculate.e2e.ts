@@ -1,6 +1,14 @@
 import { expect } from 'chai';
-import { calculate } from '@linewright/lines';
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { calculate, lineKinds, solve } from '@linewright/lines';
+import type { Page } from 'playwright-core';
 import { openPage, outsideRequests, screenshot } from './browser';
+
+async function chooseOption(page: Page, selectName: string, option: string): Promise<void> {
+  await page.locator(`mat-select[name="${selectName}"]`).click();
+  await page.getByRole('option', { name: option, exact: true }).click();
+}
 
 describe('Calculate page', () => {
   it('shows the microstrip impedance live as a geometry is typed, and the API agrees', async () => {
@@ -13,11 +21,63 @@ describe('Calculate page', () => {
     // The same spec through the library directly: 0.25 mm, 0.2 mm, the default 34.8 µm copper, εr 4.5.
     const expected = calculate({ kind: 'microstrip', w: 0.25e-3, h: 0.2e-3, t: 34.8e-6, er: 4.5 });
     const shown = page.locator('[data-figure="z0"] .value');
-    await expect(await shown.textContent()).to.equal(`${Number(expected.z0.toPrecision(4))} Ω`);
+    expect(await shown.textContent()).to.equal(`${Number(expected.z0.toPrecision(4))} Ω`);
 
     await page.locator('[data-check="agrees"]').waitFor({ timeout: 10_000 });
+    await page.locator('[data-dimension="w"]').waitFor();
     await screenshot(page, 'calculate-microstrip');
     expect(outsideRequests).to.deep.equal([]);
+    await page.context().close();
+  });
+
+  it('solves for the strip width that gives 50 Ω and shows it in the width field', async () => {
+    const page = await openPage();
+    await page.goto('/calculate');
+    await chooseOption(page, 'unknown', 'Strip width');
+    await page.locator('input[name="targetValue"]').fill('50');
+
+    // Defaults: h 0.17 mm, t 34.8 µm, εr 4.3; the library's own solve is the reference.
+    const expected = solve({ kind: 'microstrip', w: 0.3e-3, h: 0.17e-3, t: 34.8e-6, er: 4.3 }, 'w', { quantity: 'z0', value: 50 });
+    const width = page.locator('input[name="w"]');
+    await page.waitForFunction(() => (document.querySelector('input[name="w"]') as HTMLInputElement | null)?.readOnly === true);
+    expect(Number(await width.inputValue())).to.be.closeTo(expected.value * 1e3, 1e-4);
+    expect(await page.locator('[data-figure="z0"] .value').textContent()).to.equal('50 Ω');
+    await screenshot(page, 'calculate-solve-width');
+    await page.context().close();
+  });
+
+  it('records keystroke-to-result time for every kind (figures for the bench, not a timed assertion)', async () => {
+    const page = await openPage();
+    await page.goto('/calculate');
+    const figures: Record<string, number> = {};
+    for (const kind of lineKinds) {
+      await chooseOption(page, 'kind', kind.label);
+      const field = kind.fields.find((candidate) => candidate.name === 'er')!;
+      await page.locator(`input[name="${field.name}"]`).waitFor();
+      // Median of several edits: time from the input event to the result text changing.
+      const samples = await page.evaluate(async (name) => {
+        const input = document.querySelector(`input[name="${name}"]`) as HTMLInputElement;
+        const readout = () => document.querySelector('lw-line-readout .value')?.textContent ?? '';
+        const times: number[] = [];
+        for (let i = 0; i < 9; i++) {
+          const before = readout();
+          const started = performance.now();
+          input.value = String(3 + (i % 2) * 0.5 + i * 0.01);
+          input.dispatchEvent(new Event('input', { bubbles: true }));
+          await new Promise<void>((done) => {
+            const check = () => (readout() !== before ? done() : requestAnimationFrame(check));
+            check();
+          });
+          times.push(performance.now() - started);
+        }
+        return times.sort((a, b) => a - b);
+      }, field.name);
+      figures[kind.kind] = samples[Math.floor(samples.length / 2)];
+    }
+    const outputDir = join(process.env['TEST_OUTPUT_DIR'] ?? 'test-output', 'perf');
+    mkdirSync(outputDir, { recursive: true });
+    writeFileSync(join(outputDir, 'keystroke-to-result.json'), JSON.stringify({ measuredAt: new Date().toISOString(), medianMs: figures }, null, 2));
+    expect(Object.keys(figures)).to.have.length(lineKinds.length);
     await page.context().close();
   });
 });

@@ -17,7 +17,7 @@ import { trimmed } from './engineering-format';
   template: `
     <mat-form-field appearance="outline" subscriptSizing="dynamic">
       <mat-label>{{ field().label }}</mat-label>
-      <input matInput type="number" step="any" [formControl]="control()" [attr.name]="field().name"
+      <input matInput type="number" step="any" [formControl]="control()" [name]="field().name"
              [readonly]="solvedShown() !== undefined" [class.solved]="solvedShown() !== undefined"
              [attr.aria-describedby]="field().name + '-hint'" />
       @if (choices().length > 0) {
