@@ -35,6 +35,7 @@ describe('field solver symmetry, matrices and potential map', function () {
     const unequal: CrossSection = { ...section, conductors: [section.conductors[0]!, { ...section.conductors[1]!, shape: { ...shape, bottomWidth: 0.25 * mm, topWidth: 0.25 * mm } }] };
     const result = await fieldSolve(unequal);
     expect(result.symmetry).to.equal('none');
+    expect(result.warnings.join(' ')).to.contain('not alike');
     for (const matrix of [result.capacitance, result.vacuumCapacitance, result.inductance]) expectClose(matrix[0]![1]!, matrix[1]![0]!, 1e-6, 'symmetry');
     expect(result.capacitance[0]![1]!).to.be.below(0);
     const identity = [0, 1].map((i) => [0, 1].map((j) => result.inductance[i]![0]! * result.vacuumCapacitance[0]![j]! + result.inductance[i]![1]! * result.vacuumCapacitance[1]![j]!));

@@ -35,6 +35,8 @@ export const FIELD_DEFAULT_MAX_CELLS = 500_000;
 const REFINEMENTS = [1, 2, 3, 4, 6, 8, 11, 16, 22, 32, 45, 64];
 /** Grids always solved, whatever the caps, so that every result has a finite error estimate (the first two are tiny). */
 const MIN_LEVELS = 2;
+/** Relative difference of the two self-capacitances above which a pair counts as unequal. */
+const ASYMMETRY_NOTICE = 1e-3;
 /** Solve time grows about as cells^1.25 with MIC(0)-CG (common practice, no source; measured in bench/field.bench.ts). */
 const TIME_GROWTH = 1.25;
 
@@ -148,6 +150,10 @@ export async function fieldSolve(section: CrossSection, options: FieldSolveOptio
   }
   if (warnings.length === 0 && estimate!.error > tolerance) {
     warnings.push(`the finest grid (${history[history.length - 1]!.solution.cells} cells) did not reach the ${percent(tolerance)} tolerance`);
+  }
+  const [c11, c22] = [estimate!.parameters.capacitance[0]![0]!, estimate!.parameters.capacitance[1]?.[1]];
+  if (c22 !== undefined && estimate!.parameters.capacitance.length === 2 && Math.abs(c11 - c22) > ASYMMETRY_NOTICE * c11) {
+    warnings.push('the two conductors are not alike: zOdd and zEven use their mean self-capacitance, an approximation for unequal lines');
   }
   const finest = history[history.length - 1]!;
   const picked = plan.symmetry === 'pair' ? 1 : 0;
