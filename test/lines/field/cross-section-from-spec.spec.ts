@@ -103,3 +103,12 @@ describe('crossSectionFromSpec and fieldSolveLine', function () {
     expect(() => crossSectionFromSpec(microstrip, { etchAngle: 0.05 })).to.throw(LineInputError).with.property('field', 'etchAngle');
   });
 });
+
+describe('fieldSolveLine with section options', () => {
+  it('solves the etched section when asked, and its Z0 rises above the rectangular strip\'s (a narrower top means less capacitance)', async () => {
+    const spec = { kind: 'microstrip', w: 0.3e-3, h: 0.17e-3, t: 35e-6, er: 4.2 } as const;
+    const rectangular = await fieldSolveLine(spec, { tolerance: 0.01 });
+    const etched = await fieldSolveLine(spec, { tolerance: 0.01, section: { stripTopWidth: 0.2e-3 } });
+    expect(etched.z0).to.be.greaterThan(rectangular.z0);
+  });
+});

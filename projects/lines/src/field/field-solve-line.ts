@@ -3,7 +3,7 @@
  * fieldSolve, reported in the same terms as calculate(spec).
  */
 import type { LineSpec } from '../types';
-import { crossSectionFromSpec } from './cross-section-from-spec';
+import { crossSectionFromSpec, type CrossSectionOptions } from './cross-section-from-spec';
 import { fieldSolve, type FieldSolveOptions, type FieldSolveResult } from './field-solve';
 
 export interface FieldLineResult {
@@ -24,9 +24,15 @@ export interface FieldLineResult {
 
 const WIRE_PAIRS: readonly LineSpec['kind'][] = ['twin-lead', 'twisted-pair'];
 
+export interface FieldSolveLineOptions extends FieldSolveOptions {
+  /** Departures from the idealised section: etched trapezoid strips, a coating, a different εr above a buried strip. */
+  section?: CrossSectionOptions;
+}
+
 /** Solves the cross-section of `spec`; throws LineInputError for impossible input, like calculate(). */
-export async function fieldSolveLine(spec: LineSpec, options: FieldSolveOptions = {}): Promise<FieldLineResult> {
-  const solution = await fieldSolve(crossSectionFromSpec(spec), options);
+export async function fieldSolveLine(spec: LineSpec, options: FieldSolveLineOptions = {}): Promise<FieldLineResult> {
+  const { section, ...solveOptions } = options;
+  const solution = await fieldSolve(crossSectionFromSpec(spec, section), solveOptions);
   const warnings = [...solution.warnings];
   if (spec.kind === 'twisted-pair') warnings.push('the twist is not modelled: the field solution is the untwisted pair of touching insulated wires');
   const common = { estimatedError: solution.estimatedError, cells: solution.cells, warnings, solution };

@@ -12,6 +12,6 @@ export {
   type FieldSolveProgress,
   type FieldSolveResult,
 } from './field-solve';
-export { fieldSolveLine, type FieldLineResult } from './field-solve-line';
+export { fieldSolveLine, type FieldLineResult, type FieldSolveLineOptions } from './field-solve-line';
 export type { LineParameters } from './line-parameters';
 export type { PotentialMap } from './potential-map';
