@@ -20,6 +20,7 @@ import { solveTargets } from './solve-targets';
 import { SweepPanel } from './sweep-panel';
 import { SpreadPanel } from './spread-panel';
 import { HandOffPanel } from './hand-off-panel';
+import { FieldCheckPanel } from './field-check/field-check-panel';
 
 type Outcome = { result: LineResult; spec: LineSpec; solved?: number; error?: undefined } | { result?: undefined; spec?: undefined; solved?: undefined; error: string };
 
@@ -48,6 +49,7 @@ const SERVER_CHECK_DELAY_MS = 400;
     SweepPanel,
     SpreadPanel,
     HandOffPanel,
+    FieldCheckPanel,
   ],
   templateUrl: './calculate-page.html',
   styleUrl: './calculate-page.scss',
