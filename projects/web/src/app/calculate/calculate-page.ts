@@ -4,7 +4,7 @@ import { ReactiveFormsModule } from '@angular/forms';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSlideToggleModule } from '@angular/material/slide-toggle';
-import { ESTIMATE_NOTE, calculate, lineKind, solve, type LineKind, type LineResult, type LineSpec } from '@linewright/lines';
+import { ESTIMATE_NOTE, calculate, lineKind, solve, type CrossSectionOptions, type LineKind, type LineResult, type LineSpec } from '@linewright/lines';
 import { catchError, debounceTime, map, of, startWith, switchMap } from 'rxjs';
 import { QuantityField } from '../shared/quantity-field';
 import { CurrentLine } from '../shared/current-line';
@@ -118,6 +118,9 @@ export class CalculatePage {
       return { error: error instanceof Error ? error.message : String(error) };
     }
   });
+
+  /** Etch and coating from the field-solver tab, drawn in the cross-section too. */
+  protected readonly sectionOptions = signal<CrossSectionOptions>({});
 
   /** The complete spec behind the shown result (with a solved unknown filled in). */
   protected readonly spec = computed(() => this.outcome()?.spec);

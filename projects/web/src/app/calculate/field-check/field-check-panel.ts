@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
-import { toObservable, toSignal } from '@angular/core/rxjs-interop';
+import { outputFromObservable, toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -75,6 +75,8 @@ export class FieldCheckPanel {
     return options;
   });
   protected readonly isIdealised = computed(() => Object.keys(this.section()).length === 0);
+  /** The edited section, so the page's drawing shows the etch and coating too. */
+  readonly sectionChange = outputFromObservable(toObservable(this.section));
 
   private readonly runs = new Subject<void>();
   private readonly cancels = new Subject<void>();

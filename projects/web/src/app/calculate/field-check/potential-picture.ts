@@ -31,7 +31,7 @@ function colourAt(fraction: number): [number, number, number] {
   `,
   styles: `
     :host { display: block; }
-    canvas { width: 100%; image-rendering: auto; border-radius: 10px; display: block; }
+    canvas { width: 100%; max-width: 560px; max-height: 320px; object-fit: contain; border-radius: 10px; display: block; margin: 0 auto; }
     .legend { display: flex; gap: 8px; align-items: center; font: var(--mat-sys-body-small); color: var(--mat-sys-on-surface-variant); margin: 6px 0 0; }
     .ramp { width: 80px; height: 10px; border-radius: 5px; background: linear-gradient(90deg, rgb(24,44,92), rgb(29,138,150), rgb(236,214,120), rgb(194,122,53)); }
   `,

@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, input, signal } from '@angular/core';
 import { MatSliderModule } from '@angular/material/slider';
-import { crossSectionFromSpec, fromSi, type LineSpec, type TableUnit } from '@linewright/lines';
+import { crossSectionFromSpec, fromSi, type CrossSectionOptions, type LineSpec, type TableUnit } from '@linewright/lines';
 import { trimmed } from '../engineering-format';
 import { sectionLayout, type Box, type Dimension, type Primitive } from './section-layout';
 
@@ -46,6 +46,8 @@ interface DrawnDimension {
 })
 export class CrossSectionDrawing {
   readonly spec = input<LineSpec | undefined>();
+  /** Departures from the idealised section (etch, coating, εr above), as the field solver sees them. */
+  readonly section = input<CrossSectionOptions>({});
   /** The unit dimension labels are shown in. */
   readonly unit = input<TableUnit>('mm');
   protected readonly zoom = signal(1);
@@ -61,9 +63,9 @@ export class CrossSectionDrawing {
     const spec = this.spec();
     if (!spec) return undefined;
     try {
-      return sectionLayout(crossSectionFromSpec(spec), spec);
+      return sectionLayout(crossSectionFromSpec(spec, this.section()), spec);
     } catch {
-      // An impossible spec has no shape to draw; the form already says what is wrong.
+      // An impossible spec (or section option) has no shape to draw; the form already says what is wrong.
       return undefined;
     }
   });
