@@ -1,7 +1,7 @@
 import { expect } from 'chai';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { calculate, lineKinds, solve } from '@linewright/lines';
+import { calculate, fieldSolveLine, lineKinds, solve } from '@linewright/lines';
 import type { Page } from 'playwright-core';
 import { openPage, outsideRequests, screenshot } from './browser';
 
@@ -71,6 +71,21 @@ describe('Calculate page', () => {
     expect(Number(await width.inputValue())).to.be.closeTo(expected.value * 1e3, 1e-4);
     expect(await page.locator('[data-figure="z0"] .value').textContent()).to.equal('50 Ω');
     await screenshot(page, 'calculate-solve-width');
+    await page.context().close();
+  });
+
+  it('checks the line with the field solver in a Web Worker and shows the field Z0 beside the formula', async () => {
+    const page = await openPage();
+    await page.goto('/calculate');
+    await page.getByRole('tab', { name: 'Field solver' }).click();
+    await page.getByRole('button', { name: 'Check with the field solver' }).click();
+    const fieldCell = page.locator('tr[data-row="Z0"] td[data-cell="field"]');
+    await fieldCell.waitFor({ timeout: 30_000 });
+    // The same solve in Node, with the page's tolerance (0.5 %): the worker runs the same library.
+    const reference = await fieldSolveLine({ kind: 'microstrip', w: 0.3e-3, h: 0.17e-3, t: 34.8e-6, er: 4.3 }, { tolerance: 0.005 });
+    const shown = Number((await fieldCell.textContent())!.replace('Ω', '').trim());
+    expect(shown).to.be.closeTo(reference.z0, reference.z0 * 1e-4);
+    await screenshot(page, 'calculate-field-solver');
     await page.context().close();
   });
 
