@@ -12,13 +12,17 @@ export interface ExampleOptions {
   log?: (line: string) => void;
 }
 
-async function call(options: ExampleOptions, path: string, body?: unknown) {
+/** JSON as the API answers it; the OpenAPI file documents each shape. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+type Json = any;
+
+async function call(options: ExampleOptions, path: string, body?: unknown): Promise<Json> {
   const response = await fetch(`${options.baseUrl}/api/v1${path}`, {
     method: body === undefined ? 'GET' : 'POST',
     headers: { authorization: `Bearer ${options.token}`, 'content-type': 'application/json' },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
-  const answer = await response.json();
+  const answer: Json = await response.json();
   if (!response.ok) throw new Error(`${path}: ${response.status} ${answer.detail ?? answer.title}`);
   return answer;
 }
