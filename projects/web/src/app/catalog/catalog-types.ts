@@ -72,7 +72,7 @@ export interface LineType extends CatalogEntry {
 
 /** What a create or update sends: the entry's own fields, quantities in SI or as unit strings. */
 export type MaterialInput = Pick<Material, 'name' | 'dk'> & Partial<Pick<Material, 'description' | 'df' | 'dielectricStrength' | 'notes'>> & { referenceFrequency?: number | string };
-export type ConductorInput = Pick<Conductor, 'name' | 'conductivity' | 'foilThicknesses'> & Partial<Pick<Conductor, 'description' | 'roughness' | 'notes'>>;
+export type ConductorInput = Pick<Conductor, 'name' | 'conductivity'> & { foilThicknesses: (number | string)[] } & Partial<Pick<Conductor, 'description' | 'roughness' | 'notes'>>;
 export type LineTypeInput = Pick<LineType, 'name' | 'kind' | 'geometry' | 'materialId' | 'target'> &
   Partial<Pick<LineType, 'description' | 'conductorId' | 'lengthDefault' | 'tags'>>;
 
