@@ -8,6 +8,7 @@ import { ESTIMATE_NOTE, calculate, lineKind, solve, type CrossSectionOptions, ty
 import { catchError, debounceTime, map, of, startWith, switchMap } from 'rxjs';
 import { QuantityField } from '../shared/quantity-field';
 import { CurrentLine } from '../shared/current-line';
+import { Session } from '../core/session';
 import { CalculateApi } from './calculate-api';
 import { KIND_GROUPS } from './kind-groups';
 import { buildLineForm, initialUnit, isFieldInUse, specFromForm, type LineForm, type SurfaceModel, type UnitMap } from './line-form';
@@ -58,6 +59,7 @@ const SERVER_CHECK_DELAY_MS = 400;
 export class CalculatePage {
   private readonly api = inject(CalculateApi);
   private readonly currentLine = inject(CurrentLine);
+  private readonly session = inject(Session);
   protected readonly kindGroups = KIND_GROUPS;
   protected readonly fieldGroups = FIELD_GROUPS;
   protected readonly estimateNote = ESTIMATE_NOTE;
@@ -197,7 +199,9 @@ export class CalculatePage {
     let state = this.states.get(kind);
     if (!state) {
       const description = lineKind(kind);
-      const units = signal<UnitMap>(Object.fromEntries(description.fields.map((field) => [field.name, initialUnit(field)])));
+      // A kind's fields start in the account's preferred length unit (mm until the session is known).
+      const preferred = this.session.preferredLengthUnit();
+      const units = signal<UnitMap>(Object.fromEntries(description.fields.map((field) => [field.name, initialUnit(field, preferred)])));
       state = {
         units,
         flags: signal({}),

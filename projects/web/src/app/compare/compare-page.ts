@@ -1,10 +1,15 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal, untracked } from '@angular/core';
+import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { Router } from '@angular/router';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatIconModule } from '@angular/material/icon';
 import { MatSelectModule } from '@angular/material/select';
 import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatMenuModule } from '@angular/material/menu';
+import { catchError, map, of, switchMap } from 'rxjs';
+import { LineTypesApi } from '../catalog/line-types-api';
+import { Session } from '../core/session';
 import { Clipboard } from '@angular/cdk/clipboard';
 import { ESTIMATE_NOTE, calculate, lineKind, sweep, type LineResult, type LineSpec, type TableUnit } from '@linewright/lines';
 import { CurrentLine } from '../shared/current-line';
@@ -31,7 +36,7 @@ const FREQUENCY_RANGE = [1e7, 2e10] as const;
 /** Two to four candidate lines side by side, differences read against the first, with overlaid sweeps. */
 @Component({
   selector: 'lw-compare-page',
-  imports: [MatButtonModule, MatButtonToggleModule, MatIconModule, MatSelectModule, MatFormFieldModule, CandidateCard, XyChart],
+  imports: [MatButtonModule, MatButtonToggleModule, MatIconModule, MatMenuModule, MatSelectModule, MatFormFieldModule, CandidateCard, XyChart],
   templateUrl: './compare-page.html',
   styleUrl: './compare-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -42,6 +47,23 @@ export class ComparePage {
   private readonly router = inject(Router);
   private readonly clipboard = inject(Clipboard);
   private readonly currentLine = inject(CurrentLine);
+  private readonly lineTypes = inject(LineTypesApi);
+  protected readonly session = inject(Session);
+
+  /** The team's saved line types, for signed-in users; undefined while loading or when the catalog cannot be read. */
+  protected readonly savedTypes = toSignal(
+    toObservable(this.session.isSignedIn).pipe(
+      switchMap((isSignedIn) =>
+        isSignedIn
+          ? this.lineTypes.list({ page: 1, pageSize: 100, sort: 'name' }).pipe(
+              map((page) => page.items),
+              // The menu says the catalog could not be read; the comparison itself goes on.
+              catchError(() => of([])),
+            )
+          : of(undefined),
+      ),
+    ),
+  );
 
   protected readonly estimateNote = ESTIMATE_NOTE;
   protected readonly lengthUnits = LENGTH_UNITS;
@@ -114,6 +136,13 @@ export class ComparePage {
   protected addCurrentLine(): void {
     const spec = this.currentLine.spec();
     if (spec) this.candidates.update((list) => [...list, { name: `From the calculator (${lineKind(spec.kind).label})`, spec }]);
+  }
+
+  protected addSavedType(id: number): void {
+    this.lineTypes.get(id).subscribe(({ item }) => {
+      const spec = item.computed?.spec;
+      if (spec) this.candidates.update((list) => (list.length < MAX_CANDIDATES ? [...list, { name: item.name, spec }] : list));
+    });
   }
 
   protected copyLink(): void {
