@@ -8,7 +8,7 @@ const SOLVE_TIMEOUT = 30_000;
  * Hammerstad & Jensen (IEEE MTT-S Digest 1980, pp. 407–409) claim εeff within
  * 0.2 % for 0.01 ≤ w/h ≤ 100, εr ≤ 128, and their homogeneous Z0 within 0.03 %;
  * with Z0 ∝ 1/√εeff that is ≈ 0.13 % on Z0. Claims as quoted in
- * /work/shared/REFERENCES.md, recalled there, not checked against the paper.
+ * the shared REFERENCES.md, recalled there, not checked against the paper.
  */
 const HJ_Z0_ACCURACY = 0.0013;
 const HJ_ER_EFF_ACCURACY = 0.002;
