@@ -16,3 +16,4 @@ export type { OutputQuantity } from './solve/numeric-fields';
 export { sweep, type SweepOptions, type SweepResult } from './sweep/sweep';
 export { tolerance, type Spread, type Spreads, type ToleranceOptions, type ToleranceResult, type Corner, type Sensitivity } from './tolerance/tolerance';
 export type { SampleStatistics, Histogram } from './tolerance/statistics';
+export * from './stackup/index';
