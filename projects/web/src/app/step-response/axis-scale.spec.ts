@@ -1,4 +1,4 @@
-import { axisScale, largestMagnitude } from './axis-scale';
+import { axisScale, largestMagnitude, niceStep, niceWindow } from './axis-scale';
 
 describe('axisScale', () => {
   it('reads a 5 cm trace (about 300 ps of window) in picoseconds', () => {
@@ -39,5 +39,31 @@ describe('largestMagnitude', () => {
   it('takes the largest absolute value across arrays and skips non-finite entries', () => {
     expect(largestMagnitude([1, -7, 2], [NaN, 3, Infinity])).toBe(7);
     expect(largestMagnitude([])).toBe(0);
+  });
+});
+
+describe('niceStep', () => {
+  it('rounds up to 1, 2 or 5 times a power of ten', () => {
+    expect(niceStep(3.9)).toBe(5);
+    expect(niceStep(0.011)).toBe(0.02);
+    expect(niceStep(700)).toBe(1000);
+    expect(niceStep(2)).toBe(2);
+  });
+});
+
+describe('niceWindow', () => {
+  it('starts one whole step before 0 and ends on the first whole step after the data', () => {
+    // The window of a 1 ns line ringing for 24.8 ns, with a 0.3 ns lead before the edge.
+    expect(niceWindow(-0.3, 24.8)).toEqual({ start: -5, end: 25, step: 5 });
+  });
+
+  it('keeps a lead longer than one step, rounded out to a whole step', () => {
+    expect(niceWindow(-3, 9)).toEqual({ start: -4, end: 10, step: 2 });
+  });
+
+  it('holds data ending on a step without adding another', () => {
+    const window = niceWindow(-0.1, 1);
+    expect(window.step).toBeCloseTo(0.2, 12);
+    expect(window.end).toBeCloseTo(1, 12);
   });
 });

@@ -40,3 +40,36 @@ export function largestMagnitude(...arrays: readonly (readonly number[])[]): num
   }
   return largest;
 }
+
+/** Tick spacings the axis may use: 1, 2 or 5 times a power of ten. */
+const NICE_MANTISSAS = [1, 2, 5, 10] as const;
+/** Spaces the window is cut into; the chart shows at most eight ticks. */
+const WINDOW_SPACES = 7;
+
+/** The smallest 1-2-5 step of at least `raw`. */
+export function niceStep(raw: number): number {
+  if (!(raw > 0) || !Number.isFinite(raw)) return 1;
+  const decade = 10 ** Math.floor(Math.log10(raw));
+  return NICE_MANTISSAS.find((mantissa) => mantissa * decade >= raw * (1 - 1e-9))! * decade;
+}
+
+export interface NiceWindow {
+  start: number;
+  end: number;
+  step: number;
+}
+
+/**
+ * A plotting window on whole steps that holds [first, last], like an
+ * oscilloscope's: it starts a whole step before t = 0 (a pre-trigger view of
+ * the edge's start) and ends on the first whole step at or after the data,
+ * so the chart's ticks fall on round numbers. `first` ≤ 0 < `last`, in the
+ * shown unit.
+ */
+export function niceWindow(first: number, last: number): NiceWindow {
+  const step = niceStep((last - Math.min(first, 0)) / (WINDOW_SPACES - 1));
+  // The 1e-9 keeps a value a rounding error past a whole step on that step.
+  const start = Math.min(-step, Math.floor(first / step + 1e-9) * step);
+  const end = Math.max(Math.ceil(last / step - 1e-9), 1) * step;
+  return { start, end, step };
+}

@@ -4,12 +4,17 @@ import { MatInputModule } from '@angular/material/input';
 import { ladderError, ladderStepResponse, MAX_LADDER_SECTIONS, stepResponse, type StepCircuit } from '@linewright/lines';
 import { engineering } from '../shared/engineering-format';
 import { XyChart, type XySeries } from '../shared/xy-chart';
+import { niceWindow } from './axis-scale';
 import { timeScaleOf } from './time-series';
 
 /** Section counts always compared, beside the one typed. */
 const STANDARD_COUNTS = [1, 2, 5, 10, 20, 50, 100, 200] as const;
-/** Samples per ladder solve: each is a frequency-domain solve, and the table needs several per keystroke. */
-const LADDER_POINTS = 1024;
+/**
+ * Samples per ladder solve. Each is a frequency-domain solve and the table
+ * needs several per keystroke; 1024 already widens a 100 ps edge over a
+ * 25 ns window (the library warns), which would hide the lumping error.
+ */
+const LADDER_POINTS = 2048;
 
 /**
  * How many lumped RLGC sections a model of this line needs: the ladder's
@@ -41,6 +46,9 @@ const LADDER_POINTS = 1024;
     </div>
     @if (outcome(); as o) {
       @if (o.errors) {
+        @for (warning of o.warnings; track $index) {
+          <p class="warning">{{ warning }}</p>
+        }
         <div class="layout">
           <div class="table-wrap" tabindex="0" role="region" aria-label="Ladder error versus sections">
             <table>
@@ -62,7 +70,7 @@ const LADDER_POINTS = 1024;
                 </tr>
               </tbody>
             </table>
-            <p class="caption">Errors are of the load voltage, as a share of its final value, over the whole window, for the circuit as entered (without a fitted termination).</p>
+            <p class="caption">"Not yet": not settled within the window. Errors are of the load voltage, as a share of its final value, over the whole window, for the circuit as entered (without a fitted termination).</p>
           </div>
           @if (o.chart) {
             <lw-xy-chart [series]="o.chart.series" [xLabel]="o.chart.xLabel" yLabel="Load voltage [V]"
@@ -100,11 +108,14 @@ export class LadderPanel {
       const ladder = ladderStepResponse(circuit, sections, { ...options, duration: line.time.at(-1) });
       const scale = timeScaleOf(line.time);
       const x = line.time.map((t) => t / scale.factor);
+      const window = niceWindow(x[0], x.at(-1)!);
       const series: XySeries[] = [
         { label: 'Distributed line', x, y: line.load.voltage },
         { label: `${sections}-section ladder`, x: ladder.time.map((t) => t / scale.factor), y: ladder.load.voltage },
+        { label: 'Final level', x: [window.start, window.end], y: [line.load.final, line.load.final], isReference: true },
       ];
-      return { errors, needed, largest: counts.at(-1), chart: { series, xLabel: `Time [${scale.unit}]` } };
+      const warnings = [...new Set(ladder.warnings.filter((warning) => !line.warnings.includes(warning)))];
+      return { errors, needed, largest: counts.at(-1), warnings, chart: { series, xLabel: `Time [${scale.unit}]` } };
     } catch (error) {
       // The ladder is solved in the frequency domain and refuses an ideal step; show the library's words.
       return { problem: error instanceof Error ? error.message : String(error) };
@@ -120,6 +131,6 @@ export class LadderPanel {
   }
 
   protected settle(seconds: number): string {
-    return Number.isFinite(seconds) ? engineering(seconds, 's', 3) : 'not within the window';
+    return Number.isFinite(seconds) ? engineering(seconds, 's', 3) : 'not yet';
   }
 }

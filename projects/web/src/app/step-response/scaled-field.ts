@@ -22,7 +22,7 @@ export function positive(control: AbstractControl<number | null>): ValidationErr
   template: `
     <mat-form-field appearance="outline" subscriptSizing="dynamic">
       <mat-label>{{ label() }}</mat-label>
-      <input matInput type="number" step="any" [formControl]="control()" [attr.name]="name()" />
+      <input matInput type="number" step="any" [formControl]="control()" [name]="name()" />
       @if (units().length > 0) {
         <select matTextSuffix class="unit" [attr.name]="name() + 'Unit'" [attr.aria-label]="label() + ' unit'"
                 (change)="changeUnit($any($event.target).value)">

@@ -3,6 +3,9 @@ import { MatButtonModule } from '@angular/material/button';
 import type { TerminationAdvice, TerminationScheme } from '@linewright/lines';
 import { engineering } from '../shared/engineering-format';
 
+/** Settling times within 1 % of the best count as equally fast. */
+const FASTEST_MARGIN = 1.01;
+
 export const SCHEME_LABELS: Record<TerminationScheme, string> = {
   none: 'None (as entered)',
   series: 'Series at the driver',
@@ -51,10 +54,10 @@ export function terminationParts(advice: TerminationAdvice): string {
         </thead>
         <tbody>
           @for (row of advice(); track row.scheme) {
-            <tr [class.is-fitted]="row.scheme === fitted()" [class.is-best]="row.scheme === fastest()" [attr.data-scheme]="row.scheme">
+            <tr [class.is-fitted]="row.scheme === fitted()" [class.is-best]="fastest().has(row.scheme)" [attr.data-scheme]="row.scheme">
               <th scope="row">
                 {{ labels[row.scheme] }}
-                @if (row.scheme === fastest()) { <span class="badge">fastest</span> }
+                @if (fastest().has(row.scheme)) { <span class="badge">fastest</span> }
               </th>
               @if (row.isApplicable) {
                 <td>{{ parts(row) }}</td>
@@ -94,10 +97,11 @@ export class TerminationTable {
   protected readonly labels = SCHEME_LABELS;
   protected readonly parts = terminationParts;
 
-  /** The applicable scheme whose load settles first (none of them when nothing settles). */
-  protected readonly fastest = computed<TerminationScheme | undefined>(() => {
+  /** The applicable schemes whose load settles first, within 1 % of each other (a tie is a tie). */
+  protected readonly fastest = computed<ReadonlySet<TerminationScheme>>(() => {
     const settled = this.advice().filter((row) => row.isApplicable && Number.isFinite(row.settleTime));
-    return settled.sort((a, b) => a.settleTime - b.settleTime)[0]?.scheme;
+    const best = Math.min(...settled.map((row) => row.settleTime));
+    return new Set(settled.filter((row) => row.settleTime <= best * FASTEST_MARGIN).map((row) => row.scheme));
   });
 
   protected settle(seconds: number): string {

@@ -18,6 +18,8 @@ describe('responseChart', () => {
     const [threshold, band] = chart.series.slice(2);
     expect(threshold.isReference).toBe(true);
     expect(threshold.y).toEqual([1.65, 1.65]);
+    // The window runs −0.3 … 24.8 ns; the reference lines span whole 5 ns steps around it, so the ticks are round.
+    expect(threshold.x).toEqual([-5, 25]);
     expect(band.label).toBe('Settle band ±2 %');
     expect(band.y[0]).toBeCloseTo(3.3 * 1.02, 12);
     expect(band.y[2]).toBeNaN();

@@ -4,7 +4,7 @@
  */
 import type { StepResponse } from '@linewright/lines';
 import type { XySeries } from '../shared/xy-chart';
-import { axisScale, largestMagnitude, type AxisScale } from './axis-scale';
+import { axisScale, largestMagnitude, niceWindow, type AxisScale } from './axis-scale';
 
 export interface TimeChart {
   series: XySeries[];
@@ -29,15 +29,16 @@ export function timeScaleOf(time: readonly number[]): AxisScale {
 
 /**
  * Both ends' voltage (or current) against time, plus the threshold and the
- * settle band around the load's final value as reference series. The band is
+ * settle band around the load's final value (or the final current) as
+ * reference series, drawn across a window on whole time steps. The band is
  * one series whose two edges are joined by a NaN gap, so it takes one legend
  * entry and one colour.
  */
 export function responseChart(response: StepResponse, options: TimeChartOptions): TimeChart {
   const time = timeScaleOf(response.time);
   const x = response.time.map((t) => t / time.factor);
-  const first = x[0];
-  const last = x.at(-1) ?? first;
+  // The reference lines span a window on whole steps, which sets the chart's x range to round ticks; the waveforms stay as computed.
+  const { start: first, end: last } = niceWindow(x[0], x.at(-1) ?? x[0]);
   const source = response.source[options.quantity];
   const load = response.load[options.quantity];
   const unit = options.quantity === 'voltage' ? 'V' : 'A';
