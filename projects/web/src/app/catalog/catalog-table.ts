@@ -116,7 +116,7 @@ export class CatalogTable<T extends CatalogEntry> {
 
   protected async open(entry?: T): Promise<void> {
     const data: EditorData<T> = { entry };
-    const saved = await firstValueFrom(this.dialog.open(this.editor(), { data, width: '720px', maxWidth: '96vw', autoFocus: 'first-tabbable' }).afterClosed());
+    const saved = await firstValueFrom(this.dialog.open(this.editor(), { data, width: '720px', maxWidth: '96vw', autoFocus: entry ? 'first-heading' : 'first-tabbable' }).afterClosed());
     if (saved) {
       this.problems.notify(`Saved ${this.noun()} "${(saved as T).name}".`);
       this.reload();

@@ -1,0 +1,83 @@
+import { expect } from 'chai';
+import type { Page } from 'playwright-core';
+import { BASE_URL, openPage, outsideRequests, screenshot } from './browser';
+import { CSRF_HEADERS, signIn } from './sign-in';
+
+/** The row of one entry in a catalog table, found by the search box (once the filtered page has replaced the first one). */
+async function findRow(page: Page, name: string) {
+  await page.getByLabel('Search materials').fill(name);
+  await page.waitForFunction(
+    (wanted) => {
+      const names = [...document.querySelectorAll('.name-link')].map((link) => link.textContent?.trim());
+      return names.length === 1 && names[0] === wanted;
+    },
+    name,
+  );
+  return page.getByRole('row').filter({ has: page.getByRole('button', { name: `Open ${name}` }) });
+}
+
+async function act(page: Page, name: string, action: string): Promise<void> {
+  await page.getByRole('button', { name: `Actions for ${name}` }).click();
+  await page.getByRole('menuitem', { name: action }).click();
+}
+
+describe('Catalog', () => {
+  it('an engineer saves a material as a draft and proposes it; an admin approves it', async () => {
+    const name = `E2E laminate ${Date.now()}`;
+    const engineer = await openPage();
+    await signIn(engineer, 'engineer');
+    await engineer.goto('/catalog/materials');
+    await engineer.getByRole('button', { name: 'New material' }).click();
+    const dialog = engineer.getByRole('dialog');
+    await dialog.getByLabel('Name').fill(name);
+    await dialog.getByLabel('Dk', { exact: true }).fill('3.9');
+    await dialog.getByLabel('Df', { exact: true }).fill('0.012');
+    await dialog.getByLabel('Reference frequency').fill('2');
+    await dialog.getByRole('button', { name: 'Save as draft' }).click();
+    await dialog.waitFor({ state: 'detached' });
+
+    const draftRow = await findRow(engineer, name);
+    expect(await draftRow.locator('.lw-state-chip').textContent()).to.contain('draft');
+    await act(engineer, name, 'Propose for approval');
+    await draftRow.locator('.lw-state-chip', { hasText: 'proposed' }).waitFor();
+
+    // The stored values are SI: 2 GHz reads back as 2e9 Hz.
+    const listed = await engineer.request.get(`${BASE_URL}/api/v1/materials?q=${encodeURIComponent(name)}`);
+    const [stored] = (await listed.json()).items;
+    expect(stored).to.include({ name, dk: 3.9, df: 0.012, referenceFrequency: 2e9, state: 'proposed' });
+    await engineer.context().close();
+
+    const admin = await openPage();
+    await signIn(admin, 'admin');
+    await admin.goto('/catalog/materials');
+    const proposedRow = await findRow(admin, name);
+    await act(admin, name, 'Approve');
+    await proposedRow.locator('.lw-state-chip', { hasText: 'approved' }).waitFor();
+    await screenshot(admin, 'catalog-material-approved');
+    expect(outsideRequests).to.deep.equal([]);
+    await admin.context().close();
+  });
+
+  it('a viewer reads the catalog without edit controls, and a direct write answers 403', async () => {
+    const viewer = await openPage();
+    await signIn(viewer, 'viewer');
+    await viewer.goto('/catalog/materials');
+    await viewer.getByRole('button', { name: /^Open / }).first().waitFor();
+    expect(await viewer.getByRole('button', { name: 'New material' }).count()).to.equal(0);
+    expect(await viewer.getByRole('button', { name: 'Import CSV' }).count()).to.equal(0);
+    expect(await viewer.getByRole('button', { name: /^Actions for / }).count()).to.equal(0);
+
+    await viewer.getByRole('button', { name: /^Open / }).first().click();
+    const dialog = viewer.getByRole('dialog');
+    await dialog.getByText('Read only').waitFor();
+    expect(await dialog.getByRole('button', { name: /^Save/ }).count()).to.equal(0);
+    await screenshot(viewer, 'catalog-viewer-read-only');
+
+    // The hidden buttons are only a convenience: the server refuses the write itself.
+    const write = await viewer.request.post(`${BASE_URL}/api/v1/materials`, { headers: CSRF_HEADERS, data: { name: 'Viewer attempt', dk: 4 } });
+    expect(write.status()).to.equal(403);
+    expect(write.headers()['content-type']).to.contain('application/problem+json');
+    expect((await write.json()).detail).to.contain('engineer');
+    await viewer.context().close();
+  });
+});
