@@ -1,5 +1,5 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { ChangeDetectionStrategy, Component, inject, signal, viewChild } from '@angular/core';
+import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { firstValueFrom } from 'rxjs';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
@@ -53,6 +53,7 @@ import { TokensPanel } from './tokens-panel';
   styles: `
     .grid { display: grid; grid-template-columns: repeat(auto-fit, minmax(300px, 1fr)); gap: 16px; align-items: start; }
     .done { color: var(--lw-good); margin: 0; }
+    mat-button-toggle-group { align-self: flex-start; }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -65,6 +66,7 @@ export class AccountPage {
   protected readonly isSavingUnit = signal(false);
   protected readonly isChangingPassword = signal(false);
   protected readonly isPasswordChanged = signal(false);
+  private readonly passwordForm = viewChild(FormGroupDirective);
   protected readonly password = inject(NonNullableFormBuilder).group(
     { current: ['', Validators.required], password: ['', NEW_PASSWORD_VALIDATORS], repeat: [''] },
     { validators: samePasswords },
@@ -89,7 +91,7 @@ export class AccountPage {
     try {
       const { current, password } = this.password.getRawValue();
       await firstValueFrom(this.api.changePassword(current, password));
-      this.password.reset();
+      this.passwordForm()?.resetForm();
       this.isPasswordChanged.set(true);
     } catch (error) {
       this.problems.report(error, this.password, { currentPassword: 'current', newPassword: 'password' });

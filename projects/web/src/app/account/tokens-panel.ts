@@ -1,6 +1,6 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal, viewChild } from '@angular/core';
 import { DatePipe } from '@angular/common';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { Clipboard } from '@angular/cdk/clipboard';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { firstValueFrom } from 'rxjs';
@@ -120,6 +120,8 @@ export class TokensPanel {
   protected readonly created = signal<CreatedToken | undefined>(undefined);
   protected readonly isCreating = signal(false);
   protected readonly isCopied = signal(false);
+  /** Resetting through the directive also clears its submitted flag, so the emptied form shows no errors. */
+  private readonly formDirective = viewChild.required(FormGroupDirective);
   protected readonly form = inject(NonNullableFormBuilder).group({
     name: ['', [Validators.required, Validators.maxLength(80)]],
     scope: ['read' as TokenScope, Validators.required],
@@ -133,7 +135,7 @@ export class TokensPanel {
       const { name, scope } = this.form.getRawValue();
       this.created.set(await firstValueFrom(this.api.createToken(name.trim(), scope)));
       this.isCopied.set(false);
-      this.form.reset({ name: '', scope: 'read' });
+      this.formDirective().resetForm({ name: '', scope: 'read' });
       this.tokens.reload();
     } catch (error) {
       this.problems.report(error, this.form);

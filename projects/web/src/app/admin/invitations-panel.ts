@@ -1,6 +1,6 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal, viewChild } from '@angular/core';
 import { DatePipe } from '@angular/common';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { firstValueFrom } from 'rxjs';
 import { MatButtonModule } from '@angular/material/button';
@@ -85,6 +85,7 @@ export class InvitationsPanel {
   protected readonly invitations = rxResource({ stream: () => this.api.invitations() });
   protected readonly loadProblem = computed(() => toApiProblem(this.invitations.error()).message);
   protected readonly isSending = signal(false);
+  private readonly formDirective = viewChild.required(FormGroupDirective);
   protected readonly form = inject(NonNullableFormBuilder).group({
     email: ['', [Validators.required, Validators.email]],
     role: ['engineer' as Role, Validators.required],
@@ -98,7 +99,7 @@ export class InvitationsPanel {
       const { email, role } = this.form.getRawValue();
       await firstValueFrom(this.api.invite(email.trim(), role));
       this.problems.notify(`Invited ${email} as ${role}.`);
-      this.form.reset({ email: '', role });
+      this.formDirective().resetForm({ email: '', role });
       this.invitations.reload();
     } catch (error) {
       this.problems.report(error, this.form);
