@@ -42,9 +42,8 @@ const POINTS = 2048;
  */
 export const HIGH_VOLTAGE_CAUTION = 50;
 
-type Outcome =
-  | { response: StepResponse; advice: TerminationAdvice[] | undefined; adviceProblem?: string; problem?: undefined }
-  | { response?: undefined; advice?: undefined; adviceProblem?: undefined; problem: string };
+type Outcome = { response: StepResponse; problem?: undefined } | { response?: undefined; problem: string };
+type AdviceOutcome = { rows: TerminationAdvice[]; problem?: undefined } | { rows?: undefined; problem: string };
 
 const numberControl = (value: number | null, ...validators: ValidatorFn[]) => new FormControl<number | null>(value, validators);
 
@@ -148,35 +147,46 @@ export class StepResponsePage {
   protected readonly built = computed(() => circuitFromInputs(this.inputs() satisfies CircuitInputs, this.units(), this.spec()));
   protected readonly circuit = computed(() => this.built().circuit);
 
-  /** Computed in the browser from the shared library on every change. */
-  protected readonly outcome = computed<Outcome>(() => {
+  private readonly options = computed(() => ({ band: this.band(), points: POINTS }));
+
+  /** The circuit as entered, computed in the browser from the shared library on every change. */
+  private readonly base = computed<Outcome>(() => {
     const built = this.built();
     if (!built.circuit) return { problem: built.problem };
-    const options = { band: this.band(), points: POINTS };
-    let base: StepResponse;
     try {
-      base = stepResponse(built.circuit, options);
+      return { response: stepResponse(built.circuit, this.options()) };
     } catch (error) {
       // LineInputError names the field and the rule; the page shows it in place of a result.
       return { problem: messageOf(error) };
     }
-    let advice: TerminationAdvice[] | undefined;
-    let adviceProblem: string | undefined;
-    try {
-      advice = adviseTermination(built.circuit, options);
-    } catch (error) {
-      // An ideal step cannot drive the RC scheme's frequency-domain solve; the base result still stands.
-      adviceProblem = messageOf(error);
-    }
-    const fitted = this.fitted();
-    const response = fitted === 'none' ? base : (advice?.find((row) => row.scheme === fitted)?.response ?? base);
-    return { response, advice, adviceProblem };
   });
 
-  protected readonly fittedAdvice = computed(() => this.outcome().advice?.find((row) => row.scheme === this.fitted() && row.isApplicable));
+  /** The termination advisor: five solves, so only read when a termination is fitted or its table is open. */
+  protected readonly advice = computed<AdviceOutcome | undefined>(() => {
+    const circuit = this.circuit();
+    if (!circuit) return undefined;
+    try {
+      return { rows: adviseTermination(circuit, this.options()) };
+    } catch (error) {
+      // An ideal step cannot drive the RC scheme's frequency-domain solve; the circuit's own result still stands.
+      return { problem: messageOf(error) };
+    }
+  });
+
+  /** What the plot, figures and diagram show: the circuit as entered, or with the fitted termination. */
+  protected readonly outcome = computed<Outcome>(() => {
+    const base = this.base();
+    if (!base.response || this.fitted() === 'none') return base;
+    return { response: this.fittedAdvice()?.response ?? base.response };
+  });
+
+  protected readonly fittedAdvice = computed(() => {
+    const fitted = this.fitted();
+    return fitted === 'none' ? undefined : this.advice()?.rows?.find((row) => row.scheme === fitted && row.isApplicable);
+  });
   protected readonly fittedParts = computed(() => {
     const advice = this.fittedAdvice();
-    return advice && advice.scheme !== 'none' ? terminationParts(advice) : undefined;
+    return advice ? terminationParts(advice) : undefined;
   });
 
   protected readonly chart = computed(() => {
