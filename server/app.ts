@@ -16,6 +16,9 @@ import { ApiContract, OPENAPI_PATH } from './api-contract';
 import { Problem, problemHandler } from './errors';
 import { healthRoutes } from './system/health-routes';
 import { calculationRoutes } from './calculation/calculation-routes';
+import { stepResponseRoutes } from './step-response/step-response-routes';
+import { FieldSolver } from './field-solve/field-solve-service';
+import { fieldSolveRoutes } from './field-solve/field-solve-routes';
 import { buildFeatures } from './features';
 import type { Mailer } from './mail/mail-transport';
 
@@ -41,6 +44,8 @@ export function createApp({ config, db, logger, contract = new ApiContract(), ma
   const api = express.Router();
   api.use(healthRoutes(contract, db, version));
   api.use(calculationRoutes(contract, config));
+  api.use(stepResponseRoutes(contract));
+  api.use(fieldSolveRoutes(contract, new FieldSolver()));
   api.use(buildFeatures({ config, db, contract, mailer }));
   api.use(() => {
     throw Problem.notFound('No such API route.');
