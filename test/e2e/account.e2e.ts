@@ -41,3 +41,54 @@ describe('Account', () => {
     await page.context().close();
   });
 });
+
+describe('Invitation and password reset', () => {
+  it('an admin invites by e-mail, the link from the caught mail creates the account, and a reset link sets a new password', async () => {
+    const email = `invitee-${Date.now()}@halden.test`;
+    const admin = await openPage();
+    await signIn(admin, 'admin');
+    await admin.goto('/admin');
+    await admin.getByRole('tab', { name: 'Invitations' }).click();
+    await admin.getByLabel('E-mail to invite').fill(email);
+    await admin.getByRole('button', { name: 'Invite' }).click();
+    await admin.getByRole('row').filter({ hasText: email }).waitFor();
+
+    // The development mail viewer shows what the catcher caught; the link is in the text.
+    await admin.getByRole('tab', { name: 'Caught mail' }).click();
+    await admin.getByRole('button', { name: /You are invited to Linewright/ }).first().click();
+    const mailText = await admin.locator('mat-expansion-panel.mat-expanded pre').textContent();
+    const invitationLink = /https?:\/\/\S+\/accept-invitation\?token=\S+/.exec(mailText ?? '')![0];
+    await screenshot(admin, 'admin-caught-invitation');
+
+    const invitee = await openPage();
+    await invitee.goto(new URL(invitationLink).pathname + new URL(invitationLink).search);
+    await invitee.getByLabel('Your name').fill('Lars Nyberg');
+    await invitee.getByLabel('New password', { exact: true }).fill('first-passphrase-1');
+    await invitee.getByLabel('New password again').fill('first-passphrase-1');
+    await invitee.getByRole('button', { name: 'Create my account' }).click();
+    await invitee.waitForURL('**/account');
+    await invitee.getByRole('heading', { name: 'Lars Nyberg' }).waitFor();
+
+    await invitee.getByRole('button', { name: /^Account of/ }).click();
+    await invitee.getByRole('menuitem', { name: 'Sign out' }).click();
+    await invitee.waitForURL('**/sign-in');
+    await invitee.getByRole('link', { name: 'Forgot the password?' }).click();
+    await invitee.getByLabel('E-mail').fill(email);
+    await invitee.getByRole('button', { name: 'Send the link' }).click();
+    await invitee.getByRole('heading', { name: 'Check your mail' }).waitFor();
+
+    const caught = await admin.request.get(`${BASE_URL}/api/v1/dev/mail`, { headers: { Accept: 'application/json' } });
+    const reset = ((await caught.json()).items as { to: string[]; subject: string; text: string }[]).find((mail) => mail.to.includes(email) && /reset/i.test(mail.subject))!;
+    const resetLink = new URL(/https?:\/\/\S+\/reset-password\?token=\S+/.exec(reset.text)![0]);
+    await invitee.goto(resetLink.pathname + resetLink.search);
+    await invitee.getByLabel('New password', { exact: true }).fill('second-passphrase-2');
+    await invitee.getByLabel('New password again').fill('second-passphrase-2');
+    await invitee.getByRole('button', { name: 'Set the password' }).click();
+    await invitee.getByRole('heading', { name: 'Your password is set' }).waitFor();
+
+    const signedIn = await fetch(`${BASE_URL}/api/v1/auth/token`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password: 'second-passphrase-2' }) });
+    expect(signedIn.status).to.equal(200);
+    await admin.context().close();
+    await invitee.context().close();
+  });
+});

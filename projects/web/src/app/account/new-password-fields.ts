@@ -11,7 +11,7 @@ import { errorText } from '../core/form-errors';
   imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule],
   template: `
     <ng-container [formGroup]="group()">
-      <mat-form-field appearance="outline">
+      <mat-form-field appearance="outline" subscriptSizing="dynamic" class="first">
         <mat-label>New password</mat-label>
         <input matInput type="password" formControlName="password" autocomplete="new-password" required />
         <mat-hint>At least 10 characters; a few words make a good one.</mat-hint>
@@ -24,7 +24,7 @@ import { errorText } from '../core/form-errors';
       </mat-form-field>
     </ng-container>
   `,
-  styles: `:host { display: contents; } mat-form-field { width: 100%; }`,
+  styles: `:host { display: contents; } mat-form-field { width: 100%; } .first { margin-bottom: 20px; }`,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class NewPasswordFields {

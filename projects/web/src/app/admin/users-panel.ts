@@ -40,8 +40,7 @@ import { AdminApi } from './admin-api';
             <th mat-header-cell *matHeaderCellDef>Role</th>
             <td mat-cell *matCellDef="let user">
               <mat-form-field appearance="outline" subscriptSizing="dynamic" class="role">
-                <mat-label>Role of {{ user.name }}</mat-label>
-                <mat-select [value]="user.role" (selectionChange)="setRole(user, $event.value)" [disabled]="busyId() === user.id">
+                <mat-select [aria-label]="'Role of ' + user.name" [value]="user.role" (selectionChange)="setRole(user, $event.value)" [disabled]="busyId() === user.id">
                   @for (role of roles; track role) { <mat-option [value]="role">{{ role }}</mat-option> }
                 </mat-select>
               </mat-form-field>
