@@ -80,4 +80,30 @@ describe('Catalog', () => {
     expect((await write.json()).detail).to.contain('engineer');
     await viewer.context().close();
   });
+
+  it('previews a CSV import row by row, refuses it while a row is wrong, then imports all rows and exports them again', async () => {
+    const stamp = Date.now();
+    const page = await openPage();
+    await signIn(page, 'engineer');
+    await page.goto('/catalog/materials');
+    await page.getByRole('button', { name: 'Import CSV' }).click();
+    const dialog = page.getByRole('dialog');
+    const file = (rows: string) => ({ name: 'materials.csv', mimeType: 'text/csv', buffer: Buffer.from(`name,dk,df,referenceFrequency\n${rows}`) });
+
+    await dialog.locator('input[type=file]').setInputFiles(file(`Import A ${stamp},4.1,0.015,1 GHz\nImport B ${stamp},"4,2",0.01,1 GHz\n`));
+    await dialog.locator('tr[data-row="2"]', { hasText: 'is not a number' }).waitFor();
+    expect(await dialog.getByRole('button', { name: /^Import 2 materials/ }).isDisabled()).to.equal(true);
+    await screenshot(page, 'catalog-import-preview');
+
+    await dialog.locator('input[type=file]').setInputFiles(file(`Import A ${stamp},4.1,0.015,1 GHz\nImport B ${stamp},4.2,0.01,2.5 GHz\n`));
+    await dialog.getByRole('button', { name: /^Import 2 materials/ }).click();
+    await dialog.waitFor({ state: 'detached' });
+    await page.getByLabel('Search materials').fill(String(stamp));
+    await page.getByRole('button', { name: `Open Import B ${stamp}` }).waitFor();
+
+    const exported = await page.request.get(`${BASE_URL}/api/v1/materials/export?q=${stamp}`);
+    expect(exported.headers()['content-type']).to.contain('text/csv');
+    expect(await exported.text()).to.contain(`Import B ${stamp},,4.2,0.01,2500000000`);
+    await page.context().close();
+  });
 });
