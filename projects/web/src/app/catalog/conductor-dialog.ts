@@ -43,7 +43,7 @@ function asQuantity(option: string): string {
     <h2 mat-dialog-title>{{ isNew() ? 'New conductor' : entry()!.name }}</h2>
     <mat-dialog-content>
       <form class="lw-form" [formGroup]="form" id="conductor-form" (ngSubmit)="save()">
-        <lw-entry-heading [entry]="entry()" [isEditable]="isEditable()" />
+        <lw-entry-heading [entry]="entry()" [isEditable]="isEditable()" [canEdit]="session.canEdit()" />
         @if (conflict(); as message) { <lw-conflict-notice [message]="message" (reload)="reload()" /> }
         <mat-form-field appearance="outline">
           <mat-label>Name</mat-label>

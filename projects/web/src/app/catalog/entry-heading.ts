@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { DatePipe } from '@angular/common';
 import type { CatalogEntry } from './catalog-types';
 
@@ -12,7 +12,7 @@ import type { CatalogEntry } from './catalog-types';
         <span class="lw-state-chip" [attr.data-state]="entry.state">{{ entry.state }}</span>
         <span>Version {{ entry.version }} · updated {{ entry.updatedAt | date: 'medium' }}</span>
         @if (!isEditable()) {
-          <span class="why">{{ entry.state === 'draft' ? 'Read only: your role cannot edit the catalog.' : 'Read only: only drafts are edited. An approved entry changes by a new draft.' }}</span>
+          <span class="why">Read only: {{ readOnlyReason() }}</span>
         }
       } @else {
         <span>New entries start as drafts; propose them for approval when ready.</span>
@@ -28,4 +28,17 @@ import type { CatalogEntry } from './catalog-types';
 export class EntryHeading {
   readonly entry = input<CatalogEntry | undefined>();
   readonly isEditable = input(true);
+  readonly canEdit = input(false);
+
+  protected readonly readOnlyReason = computed(() => {
+    if (!this.canEdit()) return 'your role reads the catalog; an engineer or admin changes it.';
+    switch (this.entry()?.state) {
+      case 'proposed':
+        return 'it waits for approval. An admin approves it or sends it back to draft for changes.';
+      case 'approved':
+        return 'designs rely on approved entries. A change means a new draft.';
+      default:
+        return 'retired entries stay as they were; an admin can reinstate it.';
+    }
+  });
 }
