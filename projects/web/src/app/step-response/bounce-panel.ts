@@ -57,7 +57,7 @@ interface ArrivalRow {
         </figure>
 
         <div class="table-wrap" tabindex="0" role="region" aria-label="Arrivals">
-          <table class="arrivals">
+          <table class="arrivals lw-data-table is-numeric">
             <caption>Arrivals</caption>
             <thead>
               <tr><th scope="col">#</th><th scope="col">Time</th><th scope="col">End</th><th scope="col">Step</th><th scope="col">Level after</th></tr>

@@ -51,7 +51,7 @@ const LADDER_POINTS = 2048;
         }
         <div class="layout">
           <div class="table-wrap" tabindex="0" role="region" aria-label="Ladder error versus sections">
-            <table>
+            <table class="lw-data-table is-numeric">
               <thead>
                 <tr><th scope="col">N</th><th scope="col">Worst error</th><th scope="col">RMS error</th><th scope="col">Load settles</th></tr>
               </thead>

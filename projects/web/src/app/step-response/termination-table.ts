@@ -41,7 +41,7 @@ export function terminationParts(advice: TerminationAdvice): string {
   imports: [MatButtonModule],
   template: `
     <div class="table-wrap" tabindex="0" role="region" aria-label="Termination advisor">
-      <table>
+      <table class="lw-data-table">
         <thead>
           <tr>
             <th scope="col">Termination</th>
