@@ -28,6 +28,11 @@ import { SmtpMailer, type Mailer } from './mail/mail-transport';
 import { MaterialsRepository } from './materials/materials-repository';
 import { materialsRoutes } from './materials/materials-routes';
 import { MaterialCatalog } from './materials/materials-service';
+import { StackupFilesRepository } from './stackups/stackup-files-repository';
+import { StackupShares } from './stackups/stackup-shares';
+import { StackupsRepository } from './stackups/stackups-repository';
+import { sharedStackupRoutes, stackupsRoutes } from './stackups/stackups-routes';
+import { StackupCatalog } from './stackups/stackups-service';
 import { TokensRepository } from './tokens/tokens-repository';
 import { tokensRoutes } from './tokens/tokens-routes';
 import { PersonalTokens } from './tokens/tokens-service';
@@ -52,10 +57,18 @@ export function buildFeatures({ config, db, contract, mailer = new SmtpMailer(co
   const materialsRepository = new MaterialsRepository(db);
   const conductorsRepository = new ConductorsRepository(db);
   const lineTypesRepository = new LineTypesRepository(db);
-  const usedBy = (column: 'material_id' | 'conductor_id') => ({ noun: 'line type', count: (id: number) => lineTypesRepository.countUsing(column, id) });
+  const stackupsRepository = new StackupsRepository(db);
+  const usedBy = (column: 'material_id' | 'conductor_id') => [
+    { noun: 'line type', count: (id: number) => lineTypesRepository.countUsing(column, id) },
+    { noun: 'stackup', count: (id: number) => stackupsRepository.countUsing(column === 'material_id' ? 'materialId' : 'conductorId', id) },
+  ];
   const materials = new MaterialCatalog(db, materialsRepository, audit, usedBy('material_id'));
   const conductors = new ConductorCatalog(db, conductorsRepository, audit, usedBy('conductor_id'));
   const lineTypes = new LineTypeCatalog(db, lineTypesRepository, audit, materialsRepository, conductorsRepository, contract.schemaValidator('LineSpec'));
+  const stackupFiles = new StackupFilesRepository(db);
+  const stackupUploads = { noun: 'uploaded file', count: (id: number) => stackupFiles.countUploads(id) };
+  const stackups = new StackupCatalog(db, stackupsRepository, audit, materialsRepository, conductorsRepository, lineTypesRepository, stackupUploads);
+  const stackupShares = new StackupShares(config, stackupFiles, mailer);
 
   const router = Router()
     .use(authenticate(config, users, tokens))
@@ -65,7 +78,9 @@ export function buildFeatures({ config, db, contract, mailer = new SmtpMailer(co
     .use(tokensRoutes(contract, tokens))
     .use(materialsRoutes(contract, config, materials))
     .use(conductorsRoutes(contract, conductors))
-    .use(lineTypesRoutes(contract, lineTypes));
+    .use(lineTypesRoutes(contract, lineTypes))
+    .use(stackupsRoutes(contract, config, stackups, stackupShares, stackupFiles))
+    .use(sharedStackupRoutes(contract, stackups, stackupShares));
   // The caught-mail page exists only outside production.
   if (!config.isProduction) router.use(mailRoutes(contract, new CaughtMailStore(resolve(config.mailCatcherDir))));
   return router;

@@ -38,7 +38,7 @@ export function listQueryOf(req: Request): ListQuery {
 }
 
 /** The version a write starts from, from `If-Match: "3"`; 428 when the header is missing. */
-function versionOf(req: Request): number {
+export function versionOf(req: Request): number {
   const header = req.get('if-match');
   if (!header) throw new Problem(428, 'Precondition required', 'Send If-Match with the ETag of the version you read, so no one else\'s change is lost.');
   const match = /^(?:W\/)?"(\d+)"$/.exec(header.trim());

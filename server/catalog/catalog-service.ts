@@ -38,16 +38,20 @@ export abstract class Catalog<R extends CatalogRecord, I, V> {
     private readonly audit: AuditLog,
     /** Singular name for messages and the audit log, e.g. 'material'. */
     readonly entity: string,
-    private readonly dependents?: Dependents,
+    private readonly dependents?: Dependents | Dependents[],
   ) {}
 
   /** Checks a whole input (create) or a partial one (update, `existing` set) and converts it to stored SI values. */
   protected abstract prepare(input: Partial<I>, existing: R | undefined, actor: Actor): Promise<Partial<V>>;
 
-  /** Describes what still uses the entry ("3 line types"), or undefined when nothing does. */
+  /** Describes what still uses the entry ("3 line types and 1 stackup"), or undefined when nothing does. */
   private async usage(record: R): Promise<string | undefined> {
-    const count = (await this.dependents?.count(record.id)) ?? 0;
-    return count > 0 ? `${count} ${this.dependents!.noun}${count === 1 ? '' : 's'}` : undefined;
+    const parts: string[] = [];
+    for (const dependent of [this.dependents ?? []].flat()) {
+      const count = await dependent.count(record.id);
+      if (count > 0) parts.push(`${count} ${dependent.noun}${count === 1 ? '' : 's'}`);
+    }
+    return parts.length > 0 ? parts.join(' and ') : undefined;
   }
 
   /** Any condition an entry must meet before it enters a state (e.g. its references approved). */

@@ -37,7 +37,7 @@ export class ConductorCatalog extends Catalog<Conductor, ConductorInput, Conduct
     db: Knex,
     conductors: ConductorsRepository,
     audit: AuditLog,
-    dependents: Dependents,
+    dependents: Dependents | Dependents[],
   ) {
     super(db, conductors, audit, 'conductor', dependents);
   }

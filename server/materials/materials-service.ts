@@ -67,7 +67,7 @@ export class MaterialCatalog extends Catalog<Material, MaterialInput, MaterialVa
     db: Knex,
     readonly materials: MaterialsRepository,
     audit: AuditLog,
-    dependents: Dependents,
+    dependents: Dependents | Dependents[],
   ) {
     super(db, materials, audit, 'material', dependents);
   }
