@@ -32,7 +32,7 @@ const COLUMNS: Column[] = [
   { title: 'Line', width: 150, value: (row) => row.label },
   { title: 'Layer', width: 70, value: (row) => row.layerName },
   { title: 'Type', width: 48, value: (row) => (row.structure === 'pair' ? 'diff pair' : 'single') },
-  { title: 'Target ohm', width: 62, value: (row) => `${row.targetImpedance} ±${(row.tolerance * 100).toFixed(0)}%`, isFigure: true },
+  { title: 'Target ohm', width: 62, value: (row) => `${row.targetImpedance}±${(row.tolerance * 100).toFixed(0)}%`, isFigure: true },
   { title: 'Width mm', width: 50, value: (row) => (row.width / MILLIMETRE).toFixed(4), isFigure: true },
   { title: 'Gap mm', width: 50, value: (row) => (row.gap === null ? '–' : (row.gap / MILLIMETRE).toFixed(4)), isFigure: true },
   { title: 'Reference', width: 95, value: (row) => row.referenceLayers.join(' / ') },
@@ -80,7 +80,9 @@ function drawLines(doc: PDFKit.PDFDocument, table: StackupTable, top: number): n
   for (const row of rows) {
     x = PAGE.margin;
     for (const column of COLUMNS) {
-      doc.font(column.isFigure ? 'figures' : 'text').fontSize(8).text(column.value(row), x, y, { width: column.width - 4, lineBreak: false, ellipsis: true });
+      // fontkit fails on the space glyph of IBM Plex Mono's WOFF (RangeError in its glyph decoder), so figures carry no spaces.
+      const value = column.isFigure ? column.value(row).replaceAll(' ', '') : column.value(row);
+      doc.font(column.isFigure ? 'figures' : 'text').fontSize(8).text(value, x, y, { width: column.width - 4, lineBreak: false, ellipsis: true });
       x += column.width;
     }
     y += 12.5;
@@ -105,7 +107,7 @@ function drawStack(doc: PDFKit.PDFDocument, table: StackupTable, top: number): n
   table.layers.forEach((layer, index) => {
     const x = PAGE.margin + (index < half ? 0 : columnWidth);
     const y = top + 14 + (index % half) * 11;
-    const thickness = `${(layer.thickness / MICROMETRE).toFixed(1)} µm`;
+    const thickness = `${(layer.thickness / MICROMETRE).toFixed(1)}µm`;
     const detail = layer.type === 'copper' ? `copper, ${layer.role}` : `${layer.kind}, Dk ${layer.relativePermittivity}, Df ${layer.lossTangent}${layer.material ? `, ${layer.material}` : ''}`;
     doc.font('text').fontSize(7.5).text(layer.name, x, y, { width: 90, lineBreak: false, ellipsis: true });
     doc.font('figures').fontSize(7.5).text(thickness, x + 92, y, { width: 60, lineBreak: false });
