@@ -22,6 +22,10 @@ import { SweepPanel } from './sweep-panel';
 import { SpreadPanel } from './spread-panel';
 import { HandOffPanel } from './hand-off-panel';
 import { FieldCheckPanel } from './field-check/field-check-panel';
+import { CatalogPick } from './catalog-pick';
+import type { Conductor, Material } from '../catalog/catalog-types';
+import { unitFactor } from '../shared/unit-choices';
+import { trimmed } from '../shared/engineering-format';
 
 type Outcome = { result: LineResult; spec: LineSpec; solved?: number; error?: undefined } | { result?: undefined; spec?: undefined; solved?: undefined; error: string };
 
@@ -51,6 +55,7 @@ const SERVER_CHECK_DELAY_MS = 400;
     SpreadPanel,
     HandOffPanel,
     FieldCheckPanel,
+    CatalogPick,
   ],
   templateUrl: './calculate-page.html',
   styleUrl: './calculate-page.scss',
@@ -181,6 +186,26 @@ export class CalculatePage {
 
   protected setTargetValue(text: string): void {
     this.targetValue.set(text === '' ? null : Number(text));
+  }
+
+  /** Fills Dk, Df and the frequency they were measured at from a catalog material. */
+  protected useMaterial(material: Material): void {
+    this.fill({ er: material.dk, tanDelta: material.df, dielectricReferenceFrequency: material.referenceFrequency });
+  }
+
+  /** Fills conductivity and RMS roughness from a catalog conductor. */
+  protected useConductor(conductor: Conductor): void {
+    if (conductor.roughness > 0) this.surface.set('hammerstad-bekkadal');
+    this.fill({ conductivity: conductor.conductivity, roughness: conductor.roughness > 0 ? conductor.roughness : undefined });
+  }
+
+  /** Writes SI values into the form in each field's shown unit. */
+  private fill(values: Record<string, number | undefined>): void {
+    for (const [name, value] of Object.entries(values)) {
+      const control = this.form().controls[name];
+      if (!control || value === undefined) continue;
+      control.setValue(Number(trimmed(value / unitFactor(this.units()[name] ?? ''), 6)));
+    }
   }
 
   protected setMethod(method: string): void {
