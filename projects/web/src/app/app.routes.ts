@@ -24,6 +24,17 @@ export const routes: Routes = [
     loadChildren: () => import('./catalog/catalog-routes').then((m) => m.catalogRoutes),
   },
   {
+    path: 'stackups',
+    canActivate: [signedInGuard],
+    loadChildren: () => import('./stackups/stackups-routes').then((m) => m.stackupsRoutes),
+  },
+  {
+    // The e-mailed share link's path (server/stackups/stackup-shares.ts); read-only, no sign-in.
+    path: 'shared/stackup',
+    title: 'Shared impedance table · Linewright',
+    loadComponent: () => import('./stackups/shared-stackup-page').then((m) => m.SharedStackupPage),
+  },
+  {
     path: 'account',
     title: 'Account · Linewright',
     canActivate: [signedInGuard],

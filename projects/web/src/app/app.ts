@@ -17,6 +17,7 @@ const EVERYONE: readonly Destination[] = [
   { path: '/calculate', label: 'Calculate', icon: 'straighten' },
   { path: '/compare', label: 'Compare', icon: 'view_column' },
   { path: '/step-response', label: 'Step response', icon: 'ssid_chart' },
+  { path: '/stackups', label: 'Stackups', icon: 'layers' },
   { path: '/catalog', label: 'Catalog', icon: 'inventory_2' },
 ];
 const ADMIN: Destination = { path: '/admin', label: 'Team', icon: 'group' };
