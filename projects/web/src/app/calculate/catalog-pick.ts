@@ -21,7 +21,7 @@ interface Choices {
     @if (choices(); as choices) {
       <div class="pick">
         <mat-form-field appearance="outline" subscriptSizing="dynamic">
-          <mat-label>Material from the catalog</mat-label>
+          <mat-label>Catalog material</mat-label>
           <mat-select name="catalogMaterial" (valueChange)="material.emit($event)">
             @for (entry of choices.materials; track entry.id) {
               <mat-option [value]="entry">{{ entry.name }} — Dk {{ entry.dk }}, Df {{ entry.df }}</mat-option>
@@ -31,7 +31,7 @@ interface Choices {
           </mat-select>
         </mat-form-field>
         <mat-form-field appearance="outline" subscriptSizing="dynamic">
-          <mat-label>Conductor from the catalog</mat-label>
+          <mat-label>Catalog conductor</mat-label>
           <mat-select name="catalogConductor" (valueChange)="conductor.emit($event)">
             @for (entry of choices.conductors; track entry.id) {
               <mat-option [value]="entry">{{ entry.name }}</mat-option>
@@ -46,7 +46,7 @@ interface Choices {
     }
   `,
   styles: `
-    .pick { display: grid; grid-template-columns: 1fr 1fr; gap: 8px; }
+    .pick { display: grid; grid-template-columns: minmax(0, 1fr); gap: 10px; }
     .note { margin: 0; font: var(--mat-sys-body-small); color: var(--mat-sys-on-surface-variant); }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
