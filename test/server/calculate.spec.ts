@@ -54,3 +54,14 @@ describe('POST /api/v1/calculate', () => {
     await request(testApp().app).post('/api/v1/calculate').send({ spec: microstrip, padding: 'x'.repeat(300 * 1024) }).expect(413);
   });
 });
+
+describe('POST /api/v1/calculate with the library\'s loss-model inputs', () => {
+  it('accepts the Huray roughness inputs and a Dk/Df reference frequency, with the library\'s numbers', async () => {
+    const spec = {
+      kind: 'microstrip', w: 0.3e-3, h: 0.17e-3, t: 34.8e-6, er: 4.2, tanDelta: 0.02, frequency: 5e9,
+      roughnessModel: 'huray', noduleRadius: 0.5e-6, noduleSurfaceRatio: 2, dielectricReferenceFrequency: 1e9,
+    } as const;
+    const response = await request(testApp().app).post('/api/v1/calculate').send({ spec }).expect(200);
+    expect(response.body.result.lossDbPerMeter).to.equal(calculate(spec).lossDbPerMeter);
+  });
+});
