@@ -20,6 +20,10 @@ const PAGE = { width: 841.89, height: 595.28, margin: 36 };
 /** Rows that fit one page at the smallest legible size; more are named in a footnote (the CSV has them all). */
 export const MAX_PDF_ROWS = 22;
 const MICROMETRE = 1e-6;
+const FOOTER_TOP = PAGE.height - PAGE.margin - 32;
+/** Drawn no thinner than this [pt], so mask and copper show; the drawing says it is not to scale. */
+const MIN_LAYER_HEIGHT = 5;
+const COLOURS = { copper: '#c27a35', core: '#9fbf8f', prepreg: '#cfe0b8', coating: '#4d9b8f' };
 
 interface Column {
   title: string;
@@ -62,6 +66,7 @@ export function tablePdf(table: StackupTable, generatedAt = new Date()): Promise
   let y = PAGE.margin + 44;
   y = drawLines(doc, table, y);
   y = drawStack(doc, table, y + 16);
+  drawSection(doc, table, y + 14, FOOTER_TOP - 14);
   drawFooter(doc, table);
   doc.end();
   return done;
@@ -117,6 +122,27 @@ function drawStack(doc: PDFKit.PDFDocument, table: StackupTable, top: number): n
   return lowest;
 }
 
+/** A schematic cross-section of the stack in the space left: thicknesses in proportion, thin layers enlarged; copper layers name their lines. */
+function drawSection(doc: PDFKit.PDFDocument, table: StackupTable, top: number, bottom: number): void {
+  const total = table.layers.reduce((sum, layer) => sum + layer.thickness, 0);
+  const available = bottom - top - 14;
+  if (available < 80 || table.layers.length === 0) return;
+  const scale = (available - MIN_LAYER_HEIGHT * table.layers.length) / total;
+  doc.font('bold').fontSize(9).fillColor('#000000').text('Cross-section (thin layers enlarged, not to scale)', PAGE.margin, top, { lineBreak: false });
+  let y = top + 14;
+  table.layers.forEach((layer, index) => {
+    const height = MIN_LAYER_HEIGHT + layer.thickness * scale;
+    const colour = layer.type === 'copper' ? COLOURS.copper : COLOURS[layer.kind];
+    doc.rect(PAGE.margin, y, 200, height).fillAndStroke(colour, '#555555');
+    const lines = table.rows.filter((row) => row.layerIndex === index).map((row) => row.label);
+    if (height >= 7) {
+      const label = `${layer.name}${lines.length > 0 ? ` — ${lines.join(', ')}` : ''}`;
+      doc.fillColor('#000000').font('text').fontSize(Math.min(7.5, height - 1)).text(label, PAGE.margin + 208, y + (height - Math.min(7.5, height - 1)) / 2 - 1, { width: 520, lineBreak: false, ellipsis: true });
+    }
+    y += height;
+  });
+}
+
 function drawFooter(doc: PDFKit.PDFDocument, table: StackupTable): void {
   const { width, dielectricThickness, relativePermittivity } = table.spreads;
   const percent = (fraction: number) => `±${(fraction * 100).toFixed(0)} %`;
@@ -126,7 +152,7 @@ function drawFooter(doc: PDFKit.PDFDocument, table: StackupTable): void {
     `Spread: worst corners for width ${percent(width)}, dielectric thickness ${percent(dielectricThickness)}, Dk ${percent(relativePermittivity)} (common fabrication tolerances, no source).` +
       (warned > 0 ? ` ${warned} line(s) carry model warnings; see the table in Linewright.` : ''),
   ];
-  const y = PAGE.height - PAGE.margin - 26;
+  const y = FOOTER_TOP + 6;
   doc.moveTo(PAGE.margin, y - 6).lineTo(PAGE.width - PAGE.margin, y - 6).lineWidth(0.4).strokeColor('#888888').stroke();
   doc.font('bold').fontSize(8).fillColor('#000000').text(lines[0], PAGE.margin, y, { width: PAGE.width - 2 * PAGE.margin, lineBreak: false, ellipsis: true });
   doc.font('text').fontSize(7.5).fillColor('#333333').text(lines[1], PAGE.margin, y + 12, { width: PAGE.width - 2 * PAGE.margin, lineBreak: false, ellipsis: true });

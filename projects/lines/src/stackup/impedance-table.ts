@@ -59,6 +59,9 @@ export interface ImpedanceTableRow {
   width: number;
   gap: number | null;
   referenceLayers: string[];
+  /** Dielectric height from the strip to the reference above / below, or to the surface where there is none [m]. */
+  heightAbove: number;
+  heightBelow: number;
   /** z0, or zDiff for a pair [Ω]. */
   impedance: number;
   /** (impedance − target)/target. */
@@ -126,6 +129,8 @@ function tableRow(stackup: Stackup, placement: LinePlacement, spreads: Fabricati
     width: placement.width,
     gap: isPair ? placement.gap! : null,
     referenceLayers: geometry.referenceIndices.map((reference) => stackup.layers[reference].name),
+    heightAbove: geometry.heightAbove,
+    heightBelow: geometry.heightBelow,
     impedance,
     deviation,
     isWithinTolerance: Math.abs(deviation) <= placement.tolerance,

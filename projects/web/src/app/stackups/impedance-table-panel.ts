@@ -1,5 +1,5 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, output } from '@angular/core';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { ChangeDetectionStrategy, Component, computed, inject, input, output, viewChild } from '@angular/core';
+import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
@@ -129,6 +129,7 @@ export class ImpedanceTablePanel {
   readonly added = output<Omit<Placement, 'id'>>();
 
   protected readonly errorText = errorText;
+  private readonly formDirective = viewChild(FormGroupDirective);
   protected readonly psPerMm = PS_PER_MM;
   protected readonly form = inject(NonNullableFormBuilder).group({
     label: ['', [Validators.required, Validators.maxLength(120)]],
@@ -170,6 +171,7 @@ export class ImpedanceTablePanel {
       width: value.width * MILLIMETRE,
       gap: value.structure === 'pair' ? value.gap * MILLIMETRE : null,
     });
-    this.form.controls.label.reset('');
+    // A fresh form for the next line, the other choices kept; resetForm also clears the submitted state, so no "Required" shows.
+    this.formDirective()?.resetForm({ ...value, label: '' });
   }
 }
