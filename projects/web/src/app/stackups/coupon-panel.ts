@@ -8,6 +8,9 @@ import { CsvPicker } from './csv-picker';
 import { StackupsApi } from './stackups-api';
 import type { CouponReport } from './stackup-types';
 
+/** Samples outside [0.7 × band low, 1.3 × band high] are not drawn. */
+const CHART_CLIP = [0.7, 1.3] as const;
+
 /** Axis unit for the chart: ns for time, mm for distance. */
 const AXIS = { time: { scale: 1e-9, label: 'Time [ns]' }, distance: { scale: 1e-3, label: 'Distance [mm]' } } as const;
 
@@ -40,7 +43,7 @@ const AXIS = { time: { scale: 1e-9, label: 'Time [ns]' }, distance: { scale: 1e-
         }
       </ul>
       <lw-xy-chart [series]="series()" [xLabel]="axisLabel()" yLabel="Impedance [Ω]" ariaLabel="Coupon traces against their tolerance bands" />
-      <p class="hint">Dashed: target and ± tolerance; dotted verticals mark the evaluation window ({{ windowText() }}). {{ report.note }}</p>
+      <p class="hint">Dashed: targets and ± tolerance bands; the dashed verticals mark the evaluation window ({{ windowText() }}); samples far outside the band (launch, open end) are not drawn but count in the verdict. {{ report.note }}</p>
     }
   `,
   styles: `
@@ -80,7 +83,9 @@ export class CouponPanel {
     const xs = report.lines.flatMap((line) => line.trace.x);
     const [first, last] = [Math.min(...xs) / scale, Math.max(...xs) / scale];
     for (const line of report.lines) {
-      series.push({ label: `${line.label} measured`, x: line.trace.x.map((x) => x / scale), y: line.trace.impedance });
+      // The launch and the open end reach far outside the band; they are left out of the chart (not of the verdict) so the band stays readable.
+      const shown = line.trace.impedance.map((z) => (z >= line.bandLow * CHART_CLIP[0] && z <= line.bandHigh * CHART_CLIP[1] ? z : Number.NaN));
+      series.push({ label: `${line.label} measured`, x: line.trace.x.map((x) => x / scale), y: shown });
       series.push({ label: `${line.label} target`, x: [first, last], y: [line.targetImpedance, line.targetImpedance], isReference: true });
       series.push({ label: `${line.label} ±${(line.tolerance * 100).toFixed(0)} %`, x: [first, last, Number.NaN, first, last], y: [line.bandLow, line.bandLow, Number.NaN, line.bandHigh, line.bandHigh], isReference: true });
     }

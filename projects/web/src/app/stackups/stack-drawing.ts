@@ -60,7 +60,7 @@ const MICROMETRE = 1e-6;
     </svg>
   `,
   styles: `
-    :host { display: block; }
+    :host { display: block; max-width: 640px; }
     svg { width: 100%; height: auto; display: block; font-family: inherit; }
     .layer { stroke: var(--mat-sys-outline); stroke-width: 0.5; }
     .copper { fill: #c27a35; }
