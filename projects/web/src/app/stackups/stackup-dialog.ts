@@ -65,7 +65,7 @@ type Source = 'template' | 'copy';
             </mat-form-field>
           }
         } @else {
-          <p class="summary">{{ entry()!.resolvedLayers.length }} layers · {{ entry()!.placements.length }} lines placed</p>
+          <p class="summary">{{ entry()!.layers.length }} layers · {{ entry()!.placements.length }} lines placed</p>
         }
       </form>
       @if (isSaving()) { <mat-progress-bar mode="indeterminate" aria-label="Saving" /> }

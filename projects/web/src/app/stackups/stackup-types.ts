@@ -41,8 +41,8 @@ export interface Stackup extends CatalogEntry {
   description: string | null;
   layers: StoredLayer[];
   placements: Placement[];
-  /** Dk and Df resolved from the materials. */
-  resolvedLayers: StackupLayer[];
+  /** Dk and Df resolved from the materials; single-entry answers only (lists leave it out). */
+  resolvedLayers?: StackupLayer[];
   ownerId: number | null;
 }
 
