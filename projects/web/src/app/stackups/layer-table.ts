@@ -8,7 +8,7 @@ import type { StoredLayer } from './stackup-types';
 
 const MICROMETRE = 1e-6;
 /** 1 oz copper as 1.37 mil (trade-sheet figure, as the library's COPPER_OUNCE_THICKNESS). */
-const NEW_COPPER: StoredLayer = { type: 'copper', name: 'New copper', thickness: 34.798e-6, role: 'signal', conductorId: null };
+const NEW_COPPER: StoredLayer = { type: 'copper', name: 'New copper', thickness: COPPER_OUNCE_THICKNESS, role: 'signal', conductorId: null };
 const NEW_DIELECTRIC: StoredLayer = { type: 'dielectric', name: 'New prepreg', thickness: 0.1e-3, kind: 'prepreg', materialId: null, relativePermittivity: 4.2, lossTangent: 0.02 };
 
 /** The new layers, and where one was inserted or removed (placements below it move by one). */
