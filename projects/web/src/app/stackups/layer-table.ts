@@ -1,3 +1,4 @@
+import { COPPER_OUNCE_THICKNESS } from '@linewright/lines';
 import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
