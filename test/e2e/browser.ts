@@ -22,6 +22,8 @@ const CHROMIUM_ARGS = [
 ];
 
 let browser: Browser | undefined;
+/** Pages still open, so a failing flow leaves a picture of where it stopped. */
+const openPages = new Set<Page>();
 
 /** Requests any page made to a host other than our own; flows assert it stays empty. */
 export const outsideRequests: string[] = [];
@@ -34,6 +36,8 @@ export async function openPage(viewport = { width: 1366, height: 768 }): Promise
   });
   const context = await browser.newContext({ viewport, baseURL: BASE_URL });
   const page = await context.newPage();
+  openPages.add(page);
+  page.on('close', () => openPages.delete(page));
   // Every request must stay on our own host: fonts and icons ship with the app.
   page.on('request', (request) => {
     const url = new URL(request.url());
@@ -48,6 +52,11 @@ export async function screenshot(page: Page, name: string): Promise<void> {
 }
 
 export const mochaHooks = {
+  async afterEach(this: Mocha.Context) {
+    if (this.currentTest?.state !== 'failed') return;
+    let index = 0;
+    for (const page of openPages) await screenshot(page, `failed-${this.currentTest.title.slice(0, 40).replace(/\W+/g, '-')}-${index++}`);
+  },
   async afterAll() {
     await browser?.close();
     browser = undefined;

@@ -3,17 +3,13 @@ import type { Page } from 'playwright-core';
 import { BASE_URL, openPage, outsideRequests, screenshot } from './browser';
 import { CSRF_HEADERS, signIn } from './sign-in';
 
-/** The row of one entry in a catalog table, found by the search box (once the filtered page has replaced the first one). */
+/** The row of one entry in a catalog table, found through the search box. */
 async function findRow(page: Page, name: string) {
   await page.getByLabel('Search materials').fill(name);
-  await page.waitForFunction(
-    (wanted) => {
-      const names = [...document.querySelectorAll('.name-link')].map((link) => link.textContent?.trim());
-      return names.length === 1 && names[0] === wanted;
-    },
-    name,
-  );
-  return page.getByRole('row').filter({ has: page.getByRole('button', { name: `Open ${name}` }) });
+  // Wait for the entry's own row rather than for a one-row page: a list refresh racing the search may show more rows first.
+  const row = page.getByRole('row').filter({ has: page.getByRole('button', { name: `Open ${name}`, exact: true }) });
+  await row.waitFor();
+  return row;
 }
 
 async function act(page: Page, name: string, action: string): Promise<void> {
