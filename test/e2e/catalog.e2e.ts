@@ -5,11 +5,26 @@ import { CSRF_HEADERS, signIn } from './sign-in';
 
 /** The row of one entry in a catalog table, found through the search box. */
 async function findRow(page: Page, name: string) {
-  await page.getByLabel('Search materials').fill(name);
-  // Wait for the entry's own row rather than for a one-row page: a list refresh racing the search may show more rows first.
-  const row = page.getByRole('row').filter({ has: page.getByRole('button', { name: `Open ${name}`, exact: true }) });
-  await row.waitFor();
-  return row;
+  // The filtered page must have replaced the first one before a row's menu is opened, or the refresh closes the menu.
+  // A search typed while the save dialog was still closing can be lost, so it is typed again if the page never narrows.
+  for (let attempt = 1; ; attempt++) {
+    await page.getByLabel('Search materials').fill('');
+    await page.getByLabel('Search materials').fill(name);
+    try {
+      await page.waitForFunction(
+        (wanted) => {
+          const names = [...document.querySelectorAll('.name-link')].map((link) => link.textContent?.trim());
+          return names.length === 1 && names[0] === wanted;
+        },
+        name,
+        { timeout: 8_000 },
+      );
+      break;
+    } catch (error) {
+      if (attempt === 3) throw error;
+    }
+  }
+  return page.getByRole('row').filter({ has: page.getByRole('button', { name: `Open ${name}`, exact: true }) });
 }
 
 async function act(page: Page, name: string, action: string): Promise<void> {
