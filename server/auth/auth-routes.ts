@@ -44,7 +44,12 @@ export function authRoutes(contract: ApiContract, config: Readonly<Config>, acco
       res.status(204).end();
     })
     .post('/auth/password-reset', resetLimit, contract.validate('requestPasswordReset'), async (req, res) => {
-      await accounts.requestReset(req.body.email);
+      try {
+        await accounts.requestReset(req.body.email);
+      } catch (error) {
+        // A different answer when the mail cannot go out would tell the caller the address has an account.
+        req.log.error({ err: error }, 'password reset could not be sent');
+      }
       res.status(202).json({ detail: 'If the address belongs to an account, a reset link is on its way.' });
     })
     .post('/auth/password-reset/confirm', resetLimit, contract.validate('confirmPasswordReset'), async (req, res) => {
