@@ -1,10 +1,7 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
-import { rxResource } from '@angular/core/rxjs-interop';
-import { firstValueFrom } from 'rxjs';
-import { toApiProblem, type FieldProblem } from '../core/api-problem';
-import { ProblemDisplay } from '../core/problem-display';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { XyChart, type XySeries } from '../shared/xy-chart';
 import { CsvPicker } from './csv-picker';
+import { UploadedReport, UploadProblems } from './uploaded-report';
 import { StackupsApi } from './stackups-api';
 import type { CouponReport } from './stackup-types';
 
@@ -21,18 +18,13 @@ const AXIS = { time: { scale: 1e-9, label: 'Time [ns]' }, distance: { scale: 1e-
  */
 @Component({
   selector: 'lw-coupon-panel',
-  imports: [XyChart, CsvPicker],
+  imports: [XyChart, CsvPicker, UploadProblems],
   template: `
     <div class="lw-actions">
-      <lw-csv-picker label="Upload a coupon trace" name="coupon" [disabled]="!canUpload()" (picked)="upload($event)" />
+      <lw-csv-picker label="Upload a coupon trace" name="coupon" [disabled]="!canUpload()" (picked)="uploads.upload($event)" />
       <span class="hint">First column <code>time_ns</code>, <code>time_ps</code> or <code>distance_mm</code>; one column of ohms per line, headed by its label.</span>
     </div>
-    @if (problems().length > 0) {
-      <div class="problems" role="alert">
-        <strong>Nothing was stored; the file has these problems:</strong>
-        <ul>@for (problem of problems(); track $index) { <li><code>{{ problem.field }}</code> {{ problem.detail }}</li> }</ul>
-      </div>
-    }
+    <lw-upload-problems [problems]="uploads.problems()" />
     @if (report(); as report) {
       <ul class="verdicts" aria-label="Coupon verdicts">
         @for (line of report.lines; track line.label) {
@@ -52,7 +44,6 @@ const AXIS = { time: { scale: 1e-9, label: 'Time [ns]' }, distance: { scale: 1e-
     .verdicts { margin: 0; padding-left: 20px; }
     .verdicts li strong { color: var(--mat-sys-primary); }
     .verdicts li.is-fail strong { color: var(--mat-sys-error); }
-    .problems { border: 1px solid var(--mat-sys-error); border-radius: 12px; padding: 8px 16px; color: var(--mat-sys-error); }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -60,11 +51,9 @@ export class CouponPanel {
   readonly stackupId = input.required<number>();
   readonly canUpload = input(false);
   private readonly api = inject(StackupsApi);
-  private readonly display = inject(ProblemDisplay);
-  private readonly stored = rxResource({ params: () => this.stackupId(), stream: ({ params }) => this.api.coupons(params) });
-  private readonly uploaded = signal<CouponReport | undefined>(undefined);
-  protected readonly report = computed(() => this.uploaded() ?? this.stored.value()?.items[0]?.report);
-  protected readonly problems = signal<readonly FieldProblem[]>([]);
+  /** The measurement just uploaded, else the latest one stored. */
+  protected readonly uploads = new UploadedReport<CouponReport>(() => this.stackupId(), (id) => this.api.coupons(id), (id, file) => this.api.uploadCoupon(id, file));
+  protected readonly report = this.uploads.report;
 
   protected readonly axisLabel = computed(() => AXIS[this.report()?.axis ?? 'time'].label);
   protected readonly windowText = computed(() => {
@@ -95,14 +84,4 @@ export class CouponPanel {
     return series;
   });
 
-  protected async upload(file: File): Promise<void> {
-    this.problems.set([]);
-    try {
-      this.uploaded.set((await firstValueFrom(this.api.uploadCoupon(this.stackupId(), file))).report);
-    } catch (error) {
-      const problem = toApiProblem(error);
-      if (problem.errors.length > 0) this.problems.set(problem.errors);
-      else this.display.report(problem);
-    }
-  }
 }

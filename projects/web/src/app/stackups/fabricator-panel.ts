@@ -1,10 +1,7 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
-import { rxResource } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
-import { firstValueFrom } from 'rxjs';
-import { toApiProblem, type FieldProblem } from '../core/api-problem';
-import { ProblemDisplay } from '../core/problem-display';
 import { CsvPicker } from './csv-picker';
+import { UploadedReport, UploadProblems } from './uploaded-report';
 import { StackupsApi } from './stackups-api';
 import type { ReplyReport, ReplyRow } from './stackup-types';
 
@@ -18,18 +15,13 @@ const MILLIMETRE = 1e-3;
  */
 @Component({
   selector: 'lw-fabricator-panel',
-  imports: [MatIconModule, CsvPicker],
+  imports: [MatIconModule, CsvPicker, UploadProblems],
   template: `
     <div class="lw-actions">
-      <lw-csv-picker label="Upload the fabricator's CSV" name="reply" [disabled]="!canUpload()" (picked)="upload($event)" />
+      <lw-csv-picker label="Upload the fabricator's CSV" name="reply" [disabled]="!canUpload()" (picked)="uploads.upload($event)" />
       <span class="hint">The exported table's columns; their widths, gaps, heights and computed impedance.</span>
     </div>
-    @if (problems().length > 0) {
-      <div class="problems" role="alert">
-        <strong>Nothing was stored; the file has these problems:</strong>
-        <ul>@for (problem of problems(); track $index) { <li><code>{{ problem.field }}</code> {{ problem.detail }}</li> }</ul>
-      </div>
-    }
+    <lw-upload-problems [problems]="uploads.problems()" />
     @if (report(); as report) {
       <p class="summary">{{ report.rows.length }} rows compared, <strong>{{ report.outOfTolerance }}</strong> outside tolerance@if (report.missing.length > 0) {; not in the reply: {{ report.missing.join(', ') }}}.</p>
       <div class="lw-table-wrap">
@@ -65,7 +57,6 @@ const MILLIMETRE = 1e-3;
     tr.is-out { background: color-mix(in srgb, var(--mat-sys-error-container) 45%, transparent); }
     .flag { display: inline-flex; gap: 4px; align-items: center; color: var(--mat-sys-error); }
     .flag mat-icon { font-size: 18px; width: 18px; height: 18px; }
-    .problems { border: 1px solid var(--mat-sys-error); border-radius: 12px; padding: 8px 16px; color: var(--mat-sys-error); }
     .summary { margin: 0; }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -74,23 +65,9 @@ export class FabricatorPanel {
   readonly stackupId = input.required<number>();
   readonly canUpload = input(false);
   private readonly api = inject(StackupsApi);
-  private readonly display = inject(ProblemDisplay);
-  private readonly stored = rxResource({ params: () => this.stackupId(), stream: ({ params }) => this.api.replies(params) });
-  private readonly uploaded = signal<ReplyReport | undefined>(undefined);
   /** The reply just uploaded, else the latest one stored. */
-  protected readonly report = computed(() => this.uploaded() ?? this.stored.value()?.items[0]?.report);
-  protected readonly problems = signal<readonly FieldProblem[]>([]);
-
-  protected async upload(file: File): Promise<void> {
-    this.problems.set([]);
-    try {
-      this.uploaded.set((await firstValueFrom(this.api.uploadReply(this.stackupId(), file))).report);
-    } catch (error) {
-      const problem = toApiProblem(error);
-      if (problem.errors.length > 0) this.problems.set(problem.errors);
-      else this.display.report(problem);
-    }
-  }
+  protected readonly uploads = new UploadedReport<ReplyReport>(() => this.stackupId(), (id) => this.api.replies(id), (id, file) => this.api.uploadReply(id, file));
+  protected readonly report = this.uploads.report;
 
   protected mm(metres: number): string {
     return (metres / MILLIMETRE).toFixed(4);
